@@ -1,0 +1,24 @@
+import type { Role } from "@/db/schema";
+
+/**
+ * Role → permissions, the only place that says who may do what. The role itself lives on the
+ * membership row, so a change there takes effect on the next request.
+ */
+export const permissions = {
+  "project.read": ["admin", "estimator", "project_manager"],
+  "project.write": ["admin", "estimator"],
+  "member.read": ["admin", "estimator", "project_manager"],
+  "member.write": ["admin"],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Permission = keyof typeof permissions;
+
+export function can(role: Role, permission: Permission): boolean {
+  return (permissions[permission] as readonly Role[]).includes(role);
+}
+
+export const roleLabels: Record<Role, string> = {
+  admin: "Admin",
+  estimator: "Estimator",
+  project_manager: "Project manager",
+};

@@ -1,0 +1,30 @@
+import { z } from "zod";
+
+/** Free text a person types: trimmed, no control characters, bounded. Stored and shown as text. */
+export const text = (label: string, max: number) =>
+  z
+    .string({ error: `${label} is required.` })
+    .trim()
+    .min(1, `${label} is required.`)
+    .max(max, `${label} must be at most ${max} characters.`)
+    .refine((v) => !/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(v), `${label} contains characters that are not allowed.`);
+
+export const optionalText = (label: string, max: number) =>
+  z
+    .union([text(label, max), z.literal("").transform(() => null), z.null()])
+    .optional();
+
+export const email = z
+  .string({ error: "E-mail is required." })
+  .trim()
+  .toLowerCase()
+  .max(254, "E-mail must be at most 254 characters.")
+  .pipe(z.email("Enter a valid e-mail address."));
+
+export const password = z
+  .string({ error: "Password is required." })
+  .min(1, "Password is required.")
+  .min(8, "Password must be at least 8 characters.")
+  .max(200, "Password must be at most 200 characters.");
+
+export const uuid = z.uuid("Not a valid id.");

@@ -1,0 +1,67 @@
+import { randomBytes } from "node:crypto";
+import { and, eq } from "drizzle-orm";
+import { db } from "@/db/client";
+import { memberships, users, type Role } from "@/db/schema";
+import { createProject } from "@/db/queries/projects";
+import { createInvitation } from "@/db/queries/invitations";
+import { signUpUser } from "@/db/queries/users";
+import { hashPassword } from "@/lib/auth/password";
+
+export const PASSWORD = "correct horse battery";
+export const unique = () => randomBytes(4).toString("hex");
+
+export interface Person {
+  id: string;
+  name: string;
+  email: string;
+  membershipId: string;
+}
+
+export async function addMember(orgId: string, role: Role, label: string): Promise<Person> {
+  const email = `${label.toLowerCase()}-${unique()}@example.test`;
+  const [user] = await db
+    .insert(users)
+    .values({ name: label, email, passwordHash: await hashPassword(PASSWORD) })
+    .returning({ id: users.id, name: users.name, email: users.email });
+  const [m] = await db.insert(memberships).values({ orgId, userId: user!.id, role }).returning({ id: memberships.id });
+  return { ...user!, membershipId: m!.id };
+}
+
+/** An organisation with one member per role, a spare member to act on, a project and a pending invitation. */
+export async function makeOrg(label = "Cedarline") {
+  const { user, organisation } = await signUpUser({
+    name: `${label} Admin`,
+    email: `admin-${unique()}@example.test`,
+    password: PASSWORD,
+    organisationName: `${label} Trim ${unique()}`,
+  });
+  const [adminRow] = await db
+    .select({ id: memberships.id })
+    .from(memberships)
+    .where(and(eq(memberships.orgId, organisation.id), eq(memberships.userId, user.id)));
+  const admin: Person = { ...user, membershipId: adminRow!.id };
+  const estimator = await addMember(organisation.id, "estimator", `${label}-Estimator`);
+  const projectManager = await addMember(organisation.id, "project_manager", `${label}-PM`);
+  const spare = await addMember(organisation.id, "estimator", `${label}-Spare`);
+  const project = await createProject({
+    orgId: organisation.id,
+    userId: user.id,
+    input: { name: `${label} Lofts`, generalContractor: "Harbor Ridge Builders", bidDue: "2027-03-15" },
+  });
+  const { invitation, token } = await createInvitation({
+    orgId: organisation.id,
+    invitedBy: user.id,
+    email: `invitee-${unique()}@example.test`,
+    role: "estimator",
+  });
+  return {
+    org: organisation,
+    people: { admin, estimator, project_manager: projectManager } satisfies Record<Role, Person>,
+    spare,
+    project,
+    invitation,
+    inviteToken: token,
+  };
+}
+
+export type World = Awaited<ReturnType<typeof makeOrg>>;

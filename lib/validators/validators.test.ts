@@ -1,0 +1,37 @@
+import { describe, expect, it } from "vitest";
+import { fieldErrors } from "@/lib/errors";
+import { createProjectSchema, updateProjectSchema } from "./project";
+import { signUpSchema } from "./user";
+
+const errorsOf = (r: { success: boolean; error?: unknown }) => (r.success ? {} : fieldErrors(r.error as never));
+
+describe("validators shared by forms and the API", () => {
+  it("normalise e-mail to lower case and trim names", () => {
+    const r = signUpSchema.parse({ name: "  Ada  ", email: " ADA@Example.TEST ", password: "12345678", organisationName: "Ada Trim" });
+    expect(r).toMatchObject({ name: "Ada", email: "ada@example.test" });
+  });
+
+  it("turn an empty optional form field into null", () => {
+    expect(createProjectSchema.parse({ name: "Kestrel Row", generalContractor: "", bidDue: "" })).toEqual({
+      name: "Kestrel Row",
+      generalContractor: null,
+      bidDue: null,
+    });
+  });
+
+  it.each([
+    ["2027-02-29", "Bid due date must be a date (YYYY-MM-DD)."], // 2027 is not a leap year
+    ["2027-13-01", "Bid due date must be a date (YYYY-MM-DD)."],
+    ["tomorrow", "Bid due date must be a date (YYYY-MM-DD)."],
+  ])("refuse the bid due date %s", (bidDue, message) => {
+    expect(errorsOf(createProjectSchema.safeParse({ name: "X", bidDue }))).toEqual({ bidDue: message });
+  });
+
+  it("accept a leap day that exists", () => {
+    expect(createProjectSchema.parse({ name: "X", bidDue: "2028-02-29" }).bidDue).toBe("2028-02-29");
+  });
+
+  it("refuse an update that names no field", () => {
+    expect(errorsOf(updateProjectSchema.safeParse({}))).toEqual({ _: "Nothing to change." });
+  });
+});

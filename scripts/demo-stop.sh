@@ -1,0 +1,7 @@
+#!/usr/bin/env bash
+# npm run demo:stop — stops the app, the SMTP stand-in and PostgreSQL. Data stays in .data/.
+source "$(dirname "$0")/lib.sh"
+stop_service app
+stop_service smtp
+pg_down
+say "stopped"

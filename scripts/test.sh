@@ -1,0 +1,40 @@
+#!/usr/bin/env bash
+# npm test — installs what is missing, starts PostgreSQL, creates a fresh test database, then runs the
+# type check, unit, integration and browser suites. Every suite runs; the exit code is non-zero if any failed.
+source "$(dirname "$0")/lib.sh"
+
+ensure_chromium
+ensure_node_modules
+pg_up
+recreate_database miterwise_test >/dev/null
+
+OFF="$(checkout_offset)"
+T="$DATA/test"
+rm -rf "$T"; mkdir -p "$T/results"
+export DATABASE_URL="$(db_url miterwise_test)"
+export APP_PORT="$((31000 + OFF))" SMTP_PORT="$((32000 + OFF))"
+export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
+export NEXTAUTH_SECRET="miterwise-test-secret-not-for-production"
+export OUTBOX_DIR="$T/outbox" MITERWISE_DATA_DIR="$T" BCRYPT_ROUNDS=4
+export NEXT_DIST_DIR=".next-test" # the demo's build in .next stays untouched
+cd "$ROOT"
+
+failed=()
+run() { # name, command…
+  local name="$1"; shift
+  say "$name"
+  local start=$SECONDS
+  if "$@"; then echo "  ($name: $((SECONDS - start)) s)"; else failed+=("$name"); fi
+}
+
+run "type check" npx tsc --noEmit -p .
+run "unit tests" npx vitest run --project unit --reporter=default --reporter=json --outputFile.json="$T/results/unit.json"
+run "integration tests" npx vitest run --project integration --reporter=default --reporter=json --outputFile.json="$T/results/integration.json"
+run "production build" bash -c 'npx next build >"$MITERWISE_DATA_DIR/build.log" 2>&1 || { tail -n 40 "$MITERWISE_DATA_DIR/build.log"; exit 1; }'
+PLAYWRIGHT_JSON_OUTPUT_NAME="$T/results/browser.json" run "browser tests" npx playwright test --reporter=list,json
+
+node scripts/test-summary.mjs "$T/results" "${#failed[@]}"
+if [ "${#failed[@]}" -gt 0 ]; then
+  printf '\033[1;31m✗\033[0m failed: %s\n' "${failed[*]}" >&2
+  exit 1
+fi

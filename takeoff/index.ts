@@ -1,0 +1,44 @@
+/** Public entry of the takeoff engine: re-exports only. */
+export type {
+  BoardPattern,
+  CutPiece,
+  Demand,
+  End,
+  Material,
+  MaterialTotal,
+  Opening,
+  Part,
+  PlanOptions,
+  StockItem,
+  StockPlan,
+  Style,
+  TakeoffLine,
+  TrimSpec,
+} from "./types";
+export { cutList } from "./cut-list";
+export { takeoffTotals } from "./totals";
+export { pieceDemand, MATERIALS, type PieceDemand } from "./demand";
+export { planStock } from "./stock-plan/plan-stock";
+export { orderMaterials, summarizeOrders, type MaterialOrder, type MaterialOrderSummary, type StockCatalog } from "./order";
+export { parseLength } from "./length-parse";
+export { formatLength, type LengthStyle } from "./length-format";
+export { bidTotal, labourCost, labourMinutes, materialCost, type Bid, type BidRates, type LabourRates } from "./pricing";
+export { wallSetback, wallBuildUpSchema, type WallBuildUp } from "./wall-build-up";
+export { DRESSED_LUMBER, GYPSUM_BOARD_THICKNESS, type GypsumBoard, type NominalLumber, type StudSize } from "./nominal-sizes";
+export {
+  DEFAULT_EXTENSION_THICKNESS,
+  DEFAULT_REVEAL,
+  DEFAULT_STOOL_PROJECTION,
+  HORN_PER_CASING_THICKNESS,
+} from "./trim-defaults";
+export {
+  bidRatesSchema,
+  demandSchema,
+  labourRatesSchema,
+  openingSchema,
+  planOptionsSchema,
+  stockItemSchema,
+  styleSchema,
+  takeoffLineSchema,
+  trimSpecSchema,
+} from "./schemas";

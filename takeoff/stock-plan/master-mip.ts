@@ -1,0 +1,128 @@
+import type { Column, CountedColumn } from "./columns";
+import type { Highs } from "./highs-solver";
+import { OPTIMAL } from "./highs-solver";
+import type { Instance } from "./instance";
+
+export interface MipResult {
+  columns: CountedColumn[];
+  /** HiGHS proved this the best integer choice over the given patterns. */
+  optimal: boolean;
+}
+
+export interface MipLimits {
+  nodes: number;
+  seconds: number;
+}
+
+/**
+ * Objective per board for integer plans: cost first, then purchased length.
+ * Cost is counted in `costStep` units and length adds less than one cost unit
+ * over any plan that has no more boards than pieces, so length only breaks ties.
+ */
+export function lexicographicCosts(inst: Instance, demand: ArrayLike<number>, costStep: number): number[] {
+  let pieces = 0;
+  for (let i = 0; i < demand.length; i++) pieces += demand[i] ?? 0;
+  const longest = Math.max(...inst.stocks.map((s) => s.lengthNum));
+  const perInch = 1 / ((pieces + 1) * longest);
+  return inst.stocks.map((s) => (costStep > 0 ? s.priceNum / costStep : s.priceNum) + s.lengthNum * perInch);
+}
+
+/**
+ * Integer program over a fixed set of patterns (each a column, integer board
+ * counts, demand rows ≥ d), solved by HiGHS branch-and-cut. Returns undefined
+ * when no integer plan was found within the limits.
+ */
+export function patternMip(
+  highs: Highs,
+  inst: Instance,
+  patterns: readonly Column[],
+  demand: ArrayLike<number>,
+  costs: readonly number[],
+  limits: MipLimits,
+): MipResult | undefined {
+  const n = inst.items.length;
+  const starts = [0];
+  const indices: number[] = [];
+  const values: number[] = [];
+  const upper: number[] = [];
+  for (const p of patterns) {
+    let most = 0;
+    p.a.forEach((v, i) => {
+      if (v <= 0) return;
+      indices.push(i);
+      values.push(v);
+      most = Math.max(most, Math.ceil((demand[i] ?? 0) / v));
+    });
+    starts.push(indices.length);
+    upper.push(most);
+  }
+  const model = highs.createModel({
+    numCols: patterns.length,
+    numRows: n,
+    colCost: patterns.map((p) => costs[p.stock] ?? 0),
+    colLower: patterns.map(() => 0),
+    colUpper: upper,
+    rowLower: Array.from({ length: n }, (_, i) => demand[i] ?? 0),
+    rowUpper: Array.from({ length: n }, () => highs.infinity),
+    matrix: { format: "csc", numRows: n, numCols: patterns.length, starts, indices, values },
+    integrality: patterns.map(() => highs.constants.variableType.integer),
+  });
+  try {
+    model.options.set({
+      output_flag: false,
+      mip_rel_gap: 0,
+      mip_abs_gap: 1e-7,
+      mip_max_nodes: limits.nodes,
+      time_limit: limits.seconds,
+    });
+    const status = model.run().modelStatus;
+    const x = model.getSolution().colValue;
+    const columns: CountedColumn[] = [];
+    patterns.forEach((p, j) => {
+      const count = Math.round(x[j] ?? 0);
+      if (count > 0) columns.push({ ...p, count });
+    });
+    // Accept only a complete plan: on a limit HiGHS may stop without one.
+    const covered = inst.items.every(
+      (_, i) => columns.reduce((t, c) => t + (c.a[i] ?? 0) * c.count, 0) >= (demand[i] ?? 0),
+    );
+    return covered ? { columns, optimal: status === OPTIMAL } : undefined;
+  } finally {
+    model.dispose();
+  }
+}
+
+/**
+ * Every maximal pattern (no further demanded piece fits) of every board, or
+ * undefined past `limit` patterns. A plan never needs a non-maximal pattern:
+ * filling it costs nothing and surplus pieces are dropped afterwards, so a MIP
+ * over these patterns finds the true optimum.
+ */
+export function maximalPatterns(inst: Instance, demand: ArrayLike<number>, limit: number): Column[] | undefined {
+  const n = inst.items.length;
+  const w = inst.items.map((it) => it.w);
+  const out: Column[] = [];
+  const a = new Int32Array(n);
+  let overflow = false;
+  let steps = 0;
+  const visit = (stock: number, i: number, room: number) => {
+    if (overflow) return;
+    if (++steps > limit * 50) overflow = true;
+    if (i === n) {
+      for (let j = 0; j < n; j++) if ((a[j] ?? 0) < (demand[j] ?? 0) && (w[j] ?? Infinity) <= room) return;
+      if (a.some((v) => v > 0)) out.push({ stock, a: Int32Array.from(a) });
+      if (out.length > limit) overflow = true;
+      return;
+    }
+    const wi = w[i] ?? 1;
+    const most = Math.min(demand[i] ?? 0, wi > 0 ? Math.floor(room / wi) : (demand[i] ?? 0));
+    for (let k = most; k >= 0; k--) {
+      a[i] = k;
+      visit(stock, i + 1, room - k * wi);
+      if (overflow) break;
+    }
+    a[i] = 0;
+  };
+  inst.stocks.forEach((s, stock) => visit(stock, 0, s.cap));
+  return overflow ? undefined : out;
+}

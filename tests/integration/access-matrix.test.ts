@@ -1,0 +1,137 @@
+/**
+ * Tenancy and roles, as a table: every org-scoped route handler and server action × every role ×
+ * a member of another organisation × signed out. Allowed calls succeed; refused ones answer
+ * 401 (signed out), 404 (not your organisation — indistinguishable from "no such org") or 403 (your
+ * role), and a refused call leaves every tenant table exactly as it was.
+ */
+import { beforeEach, describe, expect, it, vi } from "vitest";
+import type { Role } from "@/db/schema";
+import * as projectsRoute from "@/app/api/orgs/[orgSlug]/projects/route";
+import * as projectRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/route";
+import * as membersRoute from "@/app/api/orgs/[orgSlug]/members/route";
+import * as memberRoute from "@/app/api/orgs/[orgSlug]/members/[memberId]/route";
+import * as invitationsRoute from "@/app/api/orgs/[orgSlug]/invitations/route";
+import * as invitationRoute from "@/app/api/orgs/[orgSlug]/invitations/[invitationId]/route";
+import { call, sessionCookie } from "./helpers/http";
+import { snapshot } from "./helpers/snapshot";
+import { makeOrg, unique, type World } from "./helpers/world";
+import { actAs, runAction } from "./helpers/action";
+
+vi.mock("next/headers", async () => (await import("./helpers/action")).nextHeadersMock);
+
+type Actor = Role | "outsider" | "anonymous";
+const actors: Actor[] = ["admin", "estimator", "project_manager", "outsider", "anonymous"];
+
+interface RouteCase {
+  name: string;
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  handler: (req: any, ctx: any) => Promise<Response>;
+  method: string;
+  params: (w: World) => Record<string, string>;
+  body?: (w: World) => unknown;
+  allowed: Role[];
+  okStatus: number;
+}
+
+const org = (w: World) => ({ orgSlug: w.org.slug });
+const routes: RouteCase[] = [
+  { name: "list projects", handler: projectsRoute.GET, method: "GET", params: org, allowed: ["admin", "estimator", "project_manager"], okStatus: 200 },
+  { name: "create project", handler: projectsRoute.POST, method: "POST", params: org, body: () => ({ name: `Alder Yard ${unique()}` }), allowed: ["admin", "estimator"], okStatus: 201 },
+  { name: "read project", handler: projectRoute.GET, method: "GET", params: (w) => ({ ...org(w), projectId: w.project.id }), allowed: ["admin", "estimator", "project_manager"], okStatus: 200 },
+  { name: "update project", handler: projectRoute.PATCH, method: "PATCH", params: (w) => ({ ...org(w), projectId: w.project.id }), body: () => ({ status: "submitted", name: "Renamed" }), allowed: ["admin", "estimator"], okStatus: 200 },
+  { name: "archive project", handler: projectRoute.PATCH, method: "PATCH", params: (w) => ({ ...org(w), projectId: w.project.id }), body: () => ({ archived: true }), allowed: ["admin", "estimator"], okStatus: 200 },
+  { name: "list members", handler: membersRoute.GET, method: "GET", params: org, allowed: ["admin", "estimator", "project_manager"], okStatus: 200 },
+  { name: "change a role", handler: memberRoute.PATCH, method: "PATCH", params: (w) => ({ ...org(w), memberId: w.spare.membershipId }), body: () => ({ role: "project_manager" }), allowed: ["admin"], okStatus: 200 },
+  { name: "remove a member", handler: memberRoute.DELETE, method: "DELETE", params: (w) => ({ ...org(w), memberId: w.spare.membershipId }), allowed: ["admin"], okStatus: 204 },
+  { name: "list invitations", handler: invitationsRoute.GET, method: "GET", params: org, allowed: ["admin"], okStatus: 200 },
+  { name: "invite", handler: invitationsRoute.POST, method: "POST", params: org, body: () => ({ email: `new-${unique()}@example.test`, role: "estimator" }), allowed: ["admin"], okStatus: 201 },
+  { name: "withdraw an invitation", handler: invitationRoute.DELETE, method: "DELETE", params: (w) => ({ ...org(w), invitationId: w.invitation.id }), allowed: ["admin"], okStatus: 204 },
+];
+
+const expectedRefusal = (actor: Actor) => (actor === "anonymous" ? 401 : actor === "outsider" ? 404 : 403);
+
+let home: World;
+let other: World;
+beforeEach(async () => {
+  home = await makeOrg("Cedarline");
+  other = await makeOrg("Foxglove");
+});
+
+function cookieFor(actor: Actor) {
+  if (actor === "anonymous") return Promise.resolve(undefined);
+  // The outsider is the other organisation's admin: fully privileged, but not here.
+  const person = actor === "outsider" ? other.people.admin : home.people[actor];
+  return sessionCookie(person);
+}
+
+describe.each(routes)("route: $name", (route) => {
+  it.each(actors)("as %s", async (actor) => {
+    const allowed = actor !== "anonymous" && actor !== "outsider" && route.allowed.includes(actor);
+    const before = await snapshot();
+    const res = await call(route.handler, {
+      method: route.method,
+      path: "/api/x",
+      params: route.params(home),
+      body: route.body?.(home),
+      cookie: await cookieFor(actor),
+    });
+    if (allowed) {
+      expect(res.status).toBe(route.okStatus);
+    } else {
+      expect(res.status).toBe(expectedRefusal(actor));
+      expect(res.json?.error).toEqual(expect.any(String));
+      expect(await snapshot()).toBe(before);
+    }
+  });
+});
+
+describe("server action: createProjectAction", () => {
+  it.each(actors)("as %s", async (actor) => {
+    const { createProjectAction } = await import("@/app/(app)/[orgSlug]/projects/actions");
+    const allowed = actor === "admin" || actor === "estimator";
+    actAs(await cookieFor(actor));
+    const before = await snapshot();
+    const result = await runAction(createProjectAction, { orgSlug: home.org.slug, name: "Wren Court" });
+    if (allowed) {
+      expect(result).toMatchObject({ ok: true, data: { name: "Wren Court" } });
+    } else {
+      expect(result).toMatchObject({ ok: false, status: expectedRefusal(actor) });
+      expect(await snapshot()).toBe(before);
+    }
+  });
+
+  it("refuses bad input with field messages and writes nothing", async () => {
+    const { createProjectAction } = await import("@/app/(app)/[orgSlug]/projects/actions");
+    actAs(await cookieFor("estimator"));
+    const before = await snapshot();
+    const result = await runAction(createProjectAction, { orgSlug: home.org.slug, name: "x".repeat(161), bidDue: "31/02/2027" });
+    expect(result).toMatchObject({ ok: false, status: 422 });
+    expect(result.ok ? {} : result.fields).toEqual({
+      name: "Project name must be at most 160 characters.",
+      bidDue: "Bid due date must be a date (YYYY-MM-DD).",
+    });
+    expect(await snapshot()).toBe(before);
+  });
+});
+
+describe("ids from another organisation, through your own slug", () => {
+  const foreign: { name: string; route: RouteCase }[] = [
+    { name: "read their project", route: { ...routes[2]!, params: (w) => ({ ...org(w), projectId: other.project.id }) } },
+    { name: "update their project", route: { ...routes[3]!, params: (w) => ({ ...org(w), projectId: other.project.id }) } },
+    { name: "change their member's role", route: { ...routes[6]!, params: (w) => ({ ...org(w), memberId: other.spare.membershipId }) } },
+    { name: "remove their member", route: { ...routes[7]!, params: (w) => ({ ...org(w), memberId: other.spare.membershipId }) } },
+    { name: "withdraw their invitation", route: { ...routes[10]!, params: (w) => ({ ...org(w), invitationId: other.invitation.id }) } },
+  ];
+  it.each(foreign)("$name → 404, nothing changed", async ({ route }) => {
+    const before = await snapshot();
+    const res = await call(route.handler, {
+      method: route.method,
+      path: "/api/x",
+      params: route.params(home),
+      body: route.body?.(home),
+      cookie: await sessionCookie(home.people.admin),
+    });
+    expect(res.status).toBe(404);
+    expect(await snapshot()).toBe(before);
+  });
+});

@@ -20,7 +20,7 @@ export default function Landing() {
             Sign in
           </Link>
           <Link href="/sign-up" className="rounded-md bg-spruce-700 px-3 py-2 text-sm font-semibold text-maple-50 hover:bg-spruce-800">
-            Start free
+            Create an account
           </Link>
         </nav>
       </header>

@@ -98,7 +98,9 @@ recreate_database() {
 start_service() { # name, then the command
   local name="$1"; shift
   stop_service "$name"
-  (cd "$ROOT" && setsid "$@" >"$DATA/logs/$name.log" 2>&1 & echo $! >"$DATA/run/$name.pid")
+  # Not a group leader here, so setsid execs in place: $! is the new session's id and its group id.
+  (cd "$ROOT" && exec setsid "$@" </dev/null >"$DATA/logs/$name.log" 2>&1) &
+  echo $! >"$DATA/run/$name.pid"
 }
 
 stop_service() {

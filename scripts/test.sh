@@ -2,21 +2,12 @@
 # npm test — installs what is missing, starts PostgreSQL, creates a fresh test database, then runs the
 # type check, unit, integration and browser suites. Every suite runs; the exit code is non-zero if any failed.
 source "$(dirname "$0")/lib.sh"
-
 ensure_chromium
 ensure_node_modules
-pg_up
+source "$ROOT/scripts/test-env.sh"
 recreate_database miterwise_test >/dev/null
-
-OFF="$(checkout_offset)"
-T="$DATA/test"
+T="$MITERWISE_DATA_DIR"
 rm -rf "$T"; mkdir -p "$T/results"
-export DATABASE_URL="$(db_url miterwise_test)"
-export APP_PORT="$((31000 + OFF))" SMTP_PORT="$((32000 + OFF))"
-export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
-export NEXTAUTH_SECRET="miterwise-test-secret-not-for-production"
-export OUTBOX_DIR="$T/outbox" MITERWISE_DATA_DIR="$T" BCRYPT_ROUNDS=4
-export NEXT_DIST_DIR=".next-test" # the demo's build in .next stays untouched
 cd "$ROOT"
 
 failed=()

@@ -1,4 +1,5 @@
 import { Fraction, inchesOut } from "./exact";
+import { openingSpecKey } from "./input-key";
 import { resolveOpening, resolveSpec, type ResolvedOpening, type ResolvedSpec } from "./trim-defaults";
 import type { CutPiece, End, Material, Opening, Part, TrimSpec } from "./types";
 
@@ -76,11 +77,29 @@ export function exactCutList(opening: Opening, spec: TrimSpec): ExactPiece[] {
   return s.style === "stool-and-apron" ? stoolAndApron(o, s) : pictureFrame(o, s);
 }
 
-/** Cut list for one opening, lengths and widths rounded to the nearest 1/16 (half up). */
+const recent = new Map<string, CutPiece[]>();
+const RECENT_LIMIT = 512;
+
+const copy = (p: CutPiece): CutPiece => ({ ...p, ends: [p.ends[0], p.ends[1]] });
+
+/**
+ * Cut list for one opening, lengths and widths rounded to the nearest 1/16
+ * (half up). A job repeats a few dozen sizes across thousands of openings, so
+ * recent results are kept (only valid inputs reach the cache) and handed out
+ * as fresh copies.
+ */
 export function cutList(opening: Opening, spec: TrimSpec): CutPiece[] {
-  return exactCutList(opening, spec).map((p) => {
+  const key = openingSpecKey(opening, spec);
+  const hit = key === undefined ? undefined : recent.get(key);
+  if (hit) return hit.map(copy);
+  const pieces = exactCutList(opening, spec).map((p) => {
     const piece: CutPiece = { part: p.part, material: p.material, quantity: p.quantity, length: inchesOut(p.length), ends: [p.ends[0], p.ends[1]] };
     if (p.width !== undefined) piece.width = inchesOut(p.width);
     return piece;
   });
+  if (key !== undefined) {
+    if (recent.size >= RECENT_LIMIT) recent.delete(recent.keys().next().value ?? "");
+    recent.set(key, pieces.map(copy));
+  }
+  return pieces;
 }

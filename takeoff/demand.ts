@@ -1,4 +1,5 @@
 import { cutList } from "./cut-list";
+import { openingSpecKey } from "./input-key";
 import { takeoffLineSchema } from "./schemas";
 import type { CutPiece, Material, Part, TakeoffLine } from "./types";
 import { parseOrThrow } from "./validate";
@@ -15,25 +16,26 @@ export interface PieceDemand {
   parts: Part[];
 }
 
-function lineKey(line: TakeoffLine): string {
-  const { opening: o, spec: s } = line;
-  return JSON.stringify([o.width, o.height, o.setback, s.style, s.casingWidth, s.casingThickness, s.reveal, s.stoolHorn,
-    s.stoolProjection, s.apronInset, s.apronReturns, s.extensionThickness]);
-}
+const quantitySchema = takeoffLineSchema.shape.quantity;
 
 /**
  * Cut lists for a job, computed once per distinct opening+spec (a job of
  * thousands of openings repeats a few dozen sizes), with each piece's count
- * multiplied by its line's quantity. Lines are validated; Errors name the line.
+ * multiplied by its line's quantity. The first line of each distinct size is
+ * validated in full and every line's quantity is checked; Errors name the line.
  */
 export function jobPieces(lines: readonly TakeoffLine[]): { piece: CutPiece; count: number; line: TakeoffLine }[] {
+  if (!Array.isArray(lines)) throw new Error("lines must be a list");
   const groups = new Map<string, { line: TakeoffLine; quantity: number }>();
   lines.forEach((line, i) => {
-    parseOrThrow(takeoffLineSchema, line, `lines[${i}]`);
-    const key = lineKey(line);
-    const g = groups.get(key);
-    if (g) g.quantity += line.quantity;
-    else groups.set(key, { line, quantity: line.quantity });
+    const key = typeof line === "object" && line !== null ? openingSpecKey(line.opening, line.spec) : undefined;
+    const group = key === undefined ? undefined : groups.get(key);
+    if (group) {
+      group.quantity += parseOrThrow(quantitySchema, line.quantity, `lines[${i}].quantity`);
+      return;
+    }
+    const valid = parseOrThrow(takeoffLineSchema, line, `lines[${i}]`);
+    groups.set(key ?? `#${i}`, { line, quantity: valid.quantity });
   });
   const out: { piece: CutPiece; count: number; line: TakeoffLine }[] = [];
   for (const { line, quantity } of groups.values()) {

@@ -23,13 +23,22 @@ export function decimalToFraction(text: string): Fraction {
   return new Fraction(n, d);
 }
 
+const exactCache = new Map<number, Fraction>();
+const EXACT_CACHE_LIMIT = 4096;
+
 /**
  * Exact rational for a JS number, read as the shortest decimal that prints it.
  * That is the value a person typed (25.875, 0.1), which is what the trade means.
+ * Fractions are immutable, so recent conversions are shared from a small cache.
  */
 export function exact(x: number): Fraction {
+  const hit = exactCache.get(x);
+  if (hit) return hit;
   if (!Number.isFinite(x)) throw new Error(`not a finite number: ${x}`);
-  return decimalToFraction(String(x));
+  const f = decimalToFraction(String(x));
+  if (exactCache.size >= EXACT_CACHE_LIMIT) exactCache.clear();
+  exactCache.set(x, f);
+  return f;
 }
 
 /** floor(n / d) for BigInt with d > 0 (BigInt division truncates toward zero). */

@@ -25,16 +25,12 @@ export { formatLength, type LengthStyle } from "./length-format";
 export { bidTotal, labourCost, labourMinutes, materialCost, type Bid, type BidRates, type LabourRates } from "./pricing";
 export { wallSetback, wallBuildUpSchema, type WallBuildUp } from "./wall-build-up";
 export { DRESSED_LUMBER, GYPSUM_BOARD_THICKNESS, type GypsumBoard, type NominalLumber, type StudSize } from "./nominal-sizes";
-export {
-  DEFAULT_EXTENSION_THICKNESS,
-  DEFAULT_REVEAL,
-  DEFAULT_STOOL_PROJECTION,
-  HORN_PER_CASING_THICKNESS,
-} from "./trim-defaults";
+export { TRIM_DEFAULTS } from "./trim-defaults";
 export {
   bidRatesSchema,
   demandSchema,
   labourRatesSchema,
+  lengthTextSchema,
   openingSchema,
   planOptionsSchema,
   stockItemSchema,

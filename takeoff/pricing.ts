@@ -39,10 +39,11 @@ export function materialCost(orders: readonly { plan: { cost: number } }[]): num
 
 function exactLabourMinutes(lines: readonly TakeoffLine[], rates: LabourRates): Fraction {
   const r = parseOrThrow(labourRatesSchema, rates, "rates");
+  const pieces = jobPieces(lines); // validates every line first
   let minutes = new Fraction(0);
   for (const line of lines) minutes = minutes.add(exact(r.minutesPerOpening[line.spec.style]).mul(line.quantity));
   let extensionInches = new Fraction(0);
-  for (const { piece, count } of jobPieces(lines)) {
+  for (const { piece, count } of pieces) {
     if (piece.material === "extension") extensionInches = extensionInches.add(exact(piece.length).mul(count));
   }
   return minutes.add(extensionInches.div(12).mul(exact(r.minutesPerExtensionFoot)));

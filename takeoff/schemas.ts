@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { parseLengthExact } from "./length-parse";
 
 /**
  * zod schemas for the engine's inputs, shared with the API and forms. Each
@@ -73,4 +74,14 @@ export const bidRatesSchema = z.object({
   markup: nonNegative("markup"),
   taxRate: nonNegative("tax rate"),
   taxLabour: z.boolean().optional(),
+});
+
+/** A length as typed in a form ("2'-1 7/8\"", "635 mm") → inches; the issue carries the parse error. */
+export const lengthTextSchema = z.string().transform((text, ctx) => {
+  try {
+    return parseLengthExact(text).valueOf();
+  } catch (e) {
+    ctx.addIssue({ code: "custom", message: (e as Error).message });
+    return z.NEVER;
+  }
 });

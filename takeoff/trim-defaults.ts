@@ -21,6 +21,16 @@ export const DEFAULT_EXTENSION_THICKNESS = new Fraction(3, 4);
 /** Horn = 2 × casing thickness (common practice), so the stool ends clear the casing. */
 export const HORN_PER_CASING_THICKNESS = 2;
 
+/** The defaults above as plain numbers, for forms and documentation. */
+export const TRIM_DEFAULTS = {
+  reveal: DEFAULT_REVEAL.valueOf(),
+  stoolProjection: DEFAULT_STOOL_PROJECTION.valueOf(),
+  extensionThickness: DEFAULT_EXTENSION_THICKNESS.valueOf(),
+  hornPerCasingThickness: HORN_PER_CASING_THICKNESS,
+  apronInset: 0,
+  apronReturns: true,
+} as const;
+
 export interface ResolvedSpec {
   style: Style;
   casingWidth: Fraction;

@@ -1,12 +1,15 @@
 import { Fraction } from "../exact";
 import { addUnique, type Column } from "./columns";
-import type { Highs } from "./highs-solver";
-import { OPTIMAL } from "./highs-solver";
 import type { Instance } from "./instance";
 import { boundedKnapsack } from "./knapsack";
+import { MasterLp } from "./simplex";
 
 /** Duals are truncated to multiples of 2^-24 so knapsack sums are exact in binary floating point. */
 const DUAL_SCALE = 2 ** 24;
+/** Relative LP gap at which column generation stops: far below the 0.5 % plan target. */
+export const LP_TOLERANCE = 2e-5;
+/** Weight on the best-bound duals when smoothing (Wentges 1997). */
+const SMOOTHING = 0.6;
 
 export interface Objective {
   /** Objective coefficient per stock item as the LP sees it. */
@@ -29,6 +32,10 @@ function roundUpTo(value: number, step: number): number {
   return step > 0 ? Math.ceil(value / step - 1e-9) * step : value;
 }
 
+function quantize(y: ArrayLike<number>): Float64Array {
+  return Float64Array.from(y, (v) => (v > 0 ? Math.floor(v * DUAL_SCALE) / DUAL_SCALE : 0));
+}
+
 /**
  * Farley's bound (Farley 1990, "A note on bounding a class of linear
  * programming problems, including cutting stock problems", Operations
@@ -37,96 +44,102 @@ function roundUpTo(value: number, step: number): number {
  * bounds the LP and every integer plan. Computed here in exact rationals
  * from exactly-representable duals and an exact knapsack on the bound grid.
  */
-function provenBound(inst: Instance, demand: ArrayLike<number>, yq: Float64Array, objective: Objective): Fraction {
-  const items = inst.items;
+export function provenBound(inst: Instance, demand: ArrayLike<number>, yq: Float64Array, objective: Objective): Fraction {
   const maxCap = Math.max(...inst.stocks.map((s) => s.capLb));
-  const knap = boundedKnapsack(items.map((it) => it.wLb), yq, demand, maxCap);
+  const knap = boundedKnapsack(inst.items.map((it) => it.wLb), yq, demand, maxCap);
   let dual = 0n;
-  items.forEach((_, i) => {
-    dual += BigInt(demand[i] ?? 0) * BigInt(Math.round((yq[i] ?? 0) * DUAL_SCALE));
-  });
+  for (let i = 0; i < inst.items.length; i++) dual += BigInt(demand[i] ?? 0) * BigInt(Math.round((yq[i] ?? 0) * DUAL_SCALE));
   if (dual === 0n) return new Fraction(0);
   let theta: Fraction | undefined;
   inst.stocks.forEach((s, k) => {
     const best = knap.value(s.capLb);
     if (best <= 0) return;
-    const ratio = (objective.exactCost[k] ?? new Fraction(0)).div(new Fraction(BigInt(Math.round(best * DUAL_SCALE)), BigInt(DUAL_SCALE)));
+    const value = new Fraction(BigInt(Math.round(best * DUAL_SCALE)), BigInt(DUAL_SCALE));
+    const ratio = (objective.exactCost[k] ?? new Fraction(0)).div(value);
     if (theta === undefined || ratio.lt(theta)) theta = ratio;
   });
   return theta === undefined ? new Fraction(0) : theta.mul(new Fraction(dual, BigInt(DUAL_SCALE)));
 }
 
+interface Pricing {
+  /** Farley bound estimate at these duals (floating point; the proof is provenBound). */
+  estimate: number;
+  /** Best pattern per board whose value beats the board's cost at these duals. */
+  patterns: Column[];
+}
+
+function price(inst: Instance, demand: ArrayLike<number>, y: Float64Array, objective: Objective): Pricing {
+  const maxCap = Math.max(...inst.stocks.map((s) => s.cap));
+  const knap = boundedKnapsack(inst.items.map((it) => it.w), y, demand, maxCap);
+  let theta = Infinity;
+  const patterns: Column[] = [];
+  inst.stocks.forEach((s, k) => {
+    const best = knap.value(s.cap);
+    const c = objective.cost[k] ?? 0;
+    if (best > 0) theta = Math.min(theta, c / best);
+    if (best > c * (1 + 1e-9) + 1e-12) patterns.push({ stock: k, a: knap.counts(s.cap) });
+  });
+  let dual = 0;
+  y.forEach((v, i) => (dual += v * (demand[i] ?? 0)));
+  return { estimate: theta === Infinity ? 0 : theta * dual, patterns };
+}
+
+/** Pattern value at duals y exceeds its board's cost: it can improve the restricted LP. */
+function improves(c: Column, y: ArrayLike<number>, objective: Objective): boolean {
+  let value = 0;
+  c.a.forEach((v, i) => (value += v * (y[i] ?? 0)));
+  return value > (objective.cost[c.stock] ?? 0) * (1 + 1e-9) + 1e-12;
+}
+
 /**
  * Gilmore–Gomory column generation (Gilmore & Gomory 1961, "A linear
  * programming approach to the cutting-stock problem", Operations Research 9):
- * the HiGHS simplex solves the restricted master LP, an exact bounded knapsack
- * prices new patterns per board length from the row duals. Stops when no
- * pattern prices out or the rounded bound meets the LP value (no further
- * pattern could raise the bound a plan must respect). `columns` grows in place.
+ * a revised simplex solves the restricted master LP and an exact knapsack
+ * prices new patterns per board length from its duals. Duals are smoothed
+ * toward those of the best bound so far (Wentges 1997, "Weighted Dantzig–Wolfe
+ * decomposition", Int. Trans. Oper. Res. 4), falling back to the raw duals
+ * when the smoothed ones price out nothing. Stops when no pattern prices out,
+ * LP and bound agree within the tolerance, or the bound rounded up to `step`
+ * reaches the LP value. `columns` must hold a single-item pattern for every
+ * demanded item; it grows in place.
  */
 export function columnGeneration(
-  highs: Highs,
   inst: Instance,
   columns: Column[],
   keys: Set<string>,
   demand: ArrayLike<number>,
   objective: Objective,
-  maxIterations = 400,
+  limits: { iterations: number; tolerance: number } = { iterations: 400, tolerance: LP_TOLERANCE },
 ): CgResult {
-  const items = inst.items;
-  const model = highs.createModel();
-  try {
-    model.options.set({ output_flag: false });
-    items.forEach((_, i) => model.addRow(demand[i] ?? 0, highs.infinity, { indices: [], values: [] }));
-    const addColumn = (c: Column) => {
-      const indices: number[] = [];
-      const values: number[] = [];
-      c.a.forEach((v, i) => {
-        if (v > 0) {
-          indices.push(i);
-          values.push(v);
-        }
-      });
-      model.addCol(objective.cost[c.stock] ?? 0, 0, highs.infinity, { indices, values });
-    };
-    columns.forEach(addColumn);
-    const step = objective.step.valueOf();
-    const weights = items.map((it) => it.w);
-    const maxCap = Math.max(...inst.stocks.map((s) => s.cap));
-    let bestY = new Float64Array(items.length);
-    let bestEstimate = -Infinity;
-    let lp = 0;
-    for (let iteration = 0; ; iteration++) {
-      const status = model.run().modelStatus;
-      if (status !== OPTIMAL) throw new Error(`stock plan: HiGHS LP ended with status ${status}`);
-      lp = model.getObjectiveValue();
-      const y = model.getSolution().rowDual;
-      const yq = Float64Array.from(y, (v) => (v > 0 ? Math.floor(v * DUAL_SCALE) / DUAL_SCALE : 0));
-      const knap = boundedKnapsack(weights, yq, demand, maxCap);
-      let theta = Infinity;
-      const fresh: Column[] = [];
-      inst.stocks.forEach((s, k) => {
-        const best = knap.value(s.cap);
-        const c = objective.cost[k] ?? 0;
-        if (best > 0) theta = Math.min(theta, c / best);
-        if (best > c * (1 + 1e-9) + 1e-12) fresh.push({ stock: k, a: knap.counts(s.cap) });
-      });
-      let dual = 0;
-      yq.forEach((v, i) => (dual += v * (demand[i] ?? 0)));
-      const estimate = theta === Infinity ? 0 : theta * dual;
-      if (estimate > bestEstimate) {
-        bestEstimate = estimate;
-        bestY = yq;
+  const lp = new MasterLp(demand);
+  for (const c of columns) lp.addColumn(objective.cost[c.stock] ?? 0, c.a);
+  lp.crashBasis();
+  const step = objective.step.valueOf();
+  let center: Float64Array | undefined;
+  let bestEstimate = -Infinity;
+  for (let iteration = 0; ; iteration++) {
+    const solution = lp.solve();
+    const y = quantize(solution.y);
+    let fresh: Column[] = [];
+    for (const alpha of center ? [SMOOTHING, 0] : [0]) {
+      const ya = alpha === 0 || !center ? y : quantize(y.map((v, i) => alpha * (center?.[i] ?? 0) + (1 - alpha) * v));
+      const priced = price(inst, demand, ya, objective);
+      if (priced.estimate > bestEstimate) {
+        bestEstimate = priced.estimate;
+        center = ya;
       }
-      const converged = lp - bestEstimate <= 1e-9 * Math.max(1, Math.abs(lp)) || roundUpTo(bestEstimate, step) >= lp - 1e-9 * Math.max(1, lp);
-      if (converged || iteration >= maxIterations) break;
-      const before = columns.length;
-      if (addUnique(columns, keys, fresh) === 0) break;
-      columns.slice(before).forEach(addColumn);
+      fresh = priced.patterns.filter((c) => improves(c, y, objective));
+      if (fresh.length > 0) break;
     }
-    const x = Float64Array.from(model.getSolution().colValue);
-    return { x, objective: lp, bound: provenBound(inst, demand, bestY, objective) };
-  } finally {
-    model.dispose();
+    const value = solution.objective;
+    const converged =
+      value - bestEstimate <= limits.tolerance * Math.max(1, Math.abs(value)) ||
+      roundUpTo(bestEstimate, step) >= value - 1e-9 * Math.max(1, value);
+    const before = columns.length;
+    if (converged || iteration >= limits.iterations || addUnique(columns, keys, fresh) === 0) {
+      const bound = center ? provenBound(inst, demand, center, objective) : new Fraction(0);
+      return { x: solution.x, objective: value, bound };
+    }
+    for (const c of columns.slice(before)) lp.addColumn(objective.cost[c.stock] ?? 0, c.a);
   }
 }

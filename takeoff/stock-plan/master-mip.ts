@@ -1,3 +1,4 @@
+import type { Fraction } from "../exact";
 import type { Column, CountedColumn } from "./columns";
 import type { Highs } from "./highs-solver";
 import { OPTIMAL } from "./highs-solver";
@@ -15,16 +16,19 @@ export interface MipLimits {
 }
 
 /**
- * Objective per board for integer plans: cost first, then purchased length.
- * Cost is counted in `costStep` units and length adds less than one cost unit
- * over any plan that has no more boards than pieces, so length only breaks ties.
+ * Integer objective per board for the whole-pattern MIP: price in units of
+ * the prices' gcd (cents or coarser), exact, so HiGHS can use the integrality
+ * of the objective to close its gap; purchased length when every board is free.
+ * Length as a tie-break stays with the re-stocking in finishPlan: folding it
+ * into the objective makes it fractional and the proof far slower.
  */
-export function lexicographicCosts(inst: Instance, demand: ArrayLike<number>, costStep: number): number[] {
-  let pieces = 0;
-  for (let i = 0; i < demand.length; i++) pieces += demand[i] ?? 0;
-  const longest = Math.max(...inst.stocks.map((s) => s.lengthNum));
-  const perInch = 1 / ((pieces + 1) * longest);
-  return inst.stocks.map((s) => (costStep > 0 ? s.priceNum / costStep : s.priceNum) + s.lengthNum * perInch);
+export function integerCosts(inst: Instance, costStep: Fraction, lengthStep: Fraction): number[] {
+  const [values, step] = costStep.n === 0n ? [inst.stocks.map((s) => s.length), lengthStep] : [inst.stocks.map((s) => s.price), costStep];
+  return values.map((v) => {
+    const q = v.div(step);
+    if (q.d !== 1n) throw new Error("stock plan: objective is not a whole multiple of its step");
+    return Number(q.n);
+  });
 }
 
 /**
@@ -71,7 +75,6 @@ export function patternMip(
     model.options.set({
       output_flag: false,
       mip_rel_gap: 0,
-      mip_abs_gap: 1e-7,
       mip_max_nodes: limits.nodes,
       time_limit: limits.seconds,
     });

@@ -118,7 +118,8 @@ test("owner invites an estimator and a project manager; each sees only what the 
     await signOut(page);
 
     await signIn(page, manager.email, "not-the-password");
-    await expect(page.getByRole("alert")).toContainText("Wrong e-mail or password.");
+    // Next.js keeps an empty role="alert" route announcer on every page, hence the filter.
+    await expect(page.getByRole("alert").filter({ hasText: "Wrong e-mail or password." })).toBeVisible();
     await expect(page).toHaveURL(/\/sign-in$/);
 
     await signIn(page, manager.email, manager.password);

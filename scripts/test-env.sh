@@ -1,0 +1,15 @@
+# Source this to get the test environment in your shell (PostgreSQL up, variables exported):
+#   source scripts/test-env.sh && npx vitest run --project integration
+# `npm test` sources it too, so one suite run by hand sees exactly what the full run sees.
+source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
+pg_up
+ensure_database miterwise_test
+
+OFF="$(checkout_offset)"
+export DATABASE_URL="$(db_url miterwise_test)"
+export APP_PORT="$((31000 + OFF))" SMTP_PORT="$((32000 + OFF))"
+export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
+export NEXTAUTH_SECRET="miterwise-test-secret-not-for-production"
+export MITERWISE_DATA_DIR="$DATA/test" OUTBOX_DIR="$DATA/test/outbox" BCRYPT_ROUNDS=4
+export NEXT_DIST_DIR=".next-test" # the demo's build in .next stays untouched
+mkdir -p "$MITERWISE_DATA_DIR/results"

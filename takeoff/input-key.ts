@@ -1,0 +1,28 @@
+import type { Opening, TrimSpec } from "./types";
+
+const OPENING_FIELDS = ["width", "height", "setback"] as const;
+const SPEC_FIELDS = [
+  "style",
+  "casingWidth",
+  "casingThickness",
+  "reveal",
+  "stoolHorn",
+  "stoolProjection",
+  "apronInset",
+  "apronReturns",
+  "extensionThickness",
+] as const;
+
+const part = (v: unknown) => `${typeof v}:${String(v)}`;
+
+/**
+ * Identity of an opening+spec for reuse of its cut list: every field that
+ * shapes the result, typed, so 2.5 and "2.5", or NaN and an omitted field,
+ * never share a key. Undefined for inputs that are not plain objects.
+ */
+export function openingSpecKey(opening: Opening, spec: TrimSpec): string | undefined {
+  if (typeof opening !== "object" || opening === null || typeof spec !== "object" || spec === null) return undefined;
+  const o = opening as unknown as Record<string, unknown>;
+  const s = spec as unknown as Record<string, unknown>;
+  return [...OPENING_FIELDS.map((f) => part(o[f])), ...SPEC_FIELDS.map((f) => part(s[f]))].join("|");
+}

@@ -7,10 +7,18 @@ export class AppError extends Error {
     readonly status: 400 | 401 | 403 | 404 | 409 | 410 | 413 | 422 | 429 | 503,
     message: string,
     readonly fields?: Record<string, string>,
+    /** Extra data for the client, e.g. the current row after a stale edit. */
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
   }
 }
+
+/** Someone saved this row since you loaded it: answer 409 with the row as it is now. */
+export const stale = (current: unknown) =>
+  new AppError(409, "Someone else changed this since you loaded it. The latest version is shown; make your change again.", undefined, {
+    current,
+  });
 
 export const unauthenticated = () => new AppError(401, "Sign in to continue.");
 export const forbidden = () => new AppError(403, "Your role does not allow this.");
@@ -41,7 +49,7 @@ export function toAppError(error: unknown): AppError | null {
 export function errorResponse(error: unknown): NextResponse {
   const known = toAppError(error);
   if (known) {
-    return NextResponse.json({ error: known.message, fields: known.fields }, { status: known.status });
+    return NextResponse.json({ ...known.details, error: known.message, fields: known.fields }, { status: known.status });
   }
   console.error(error);
   return NextResponse.json({ error: "Something went wrong on our side." }, { status: 500 });

@@ -50,7 +50,8 @@ pg_dir() {
   echo "$dir"
 }
 
-as_pg() { if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi; }
+# From / so the postgres user is never left in a folder it may not enter.
+as_pg() { if [ "$(id -u)" -eq 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi; }
 
 pg_up() {
   ensure_postgres_pkg
@@ -70,6 +71,7 @@ pg_up() {
   fi
   if ! as_pg "$bin/pg_ctl" -D "$dir/data" status >/dev/null 2>&1; then
     say "starting PostgreSQL on 127.0.0.1:$PGPORT"
+    export PG_STARTED_HERE=1
     as_pg "$bin/pg_ctl" -D "$dir/data" -l "$dir/server.log" -w -t 30 \
       -o "-c listen_addresses=127.0.0.1 -c port=$PGPORT -c unix_socket_directories=$dir/socket -c fsync=off" \
       start >/dev/null || { tail -n 20 "$dir/server.log" >&2; die "PostgreSQL did not start"; }

@@ -24,6 +24,8 @@ run "integration tests" npx vitest run --project integration --reporter=default 
 run "production build" bash -c 'npx next build >"$MITERWISE_DATA_DIR/build.log" 2>&1 || { tail -n 40 "$MITERWISE_DATA_DIR/build.log"; exit 1; }'
 PLAYWRIGHT_JSON_OUTPUT_NAME="$T/results/browser.json" run "browser tests" npx playwright test --reporter=list,json
 
+# Leave the machine as we found it: stop PostgreSQL if this run started it.
+if [ -n "${PG_STARTED_HERE:-}" ]; then pg_down; fi
 node scripts/test-summary.mjs "$T/results" "${#failed[@]}"
 if [ "${#failed[@]}" -gt 0 ]; then
   printf '\033[1;31m✗\033[0m failed: %s\n' "${failed[*]}" >&2

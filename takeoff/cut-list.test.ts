@@ -74,7 +74,8 @@ describe("cut list: picture-frame", () => {
 
 /** The issue's formulas evaluated independently with BigInt rationals, then rounded to 1/16. */
 function expected(o: Opening, s: Required<TrimSpec>): Record<string, number> {
-  const [W, H, S, Cw, Ct, r, h, t] = [o.width, o.height, o.setback, s.casingWidth, s.casingThickness, s.reveal, s.stoolHorn, s.extensionThickness].map((x) => Q.of(x)) as [Q, Q, Q, Q, Q, Q, Q, Q];
+  const [W, H, S, Cw, Ct] = [o.width, o.height, o.setback, s.casingWidth, s.casingThickness].map((x) => Q.of(x)) as [Q, Q, Q, Q, Q];
+  const [r, h, t] = [s.reveal, s.stoolHorn, s.extensionThickness].map((x) => Q.of(x)) as [Q, Q, Q];
   const across = W.add(r.mul(2)).add(Cw.mul(2));
   if (s.style === "stool-and-apron") {
     return {
@@ -108,9 +109,27 @@ describe("cut list matches the formulas computed with a second exact arithmetic 
         fc.oneof(len(12, 96), decimal(12, 96)),
         fc.oneof(len(12, 96), decimal(12, 96)),
         fc.oneof(len(0, 8), decimal(0, 8)),
-        fc.record({ cw: len(1, 6), ct: len(0.25, 1.5), reveal: len(0, 0.25), horn: len(0, 2), proj: len(0, 2), inset: len(0, 1), t: len(0.25, 1.5) }),
+        fc.record({
+          cw: len(1, 6),
+          ct: len(0.25, 1.5),
+          reveal: len(0, 0.25),
+          horn: len(0, 2),
+          proj: len(0, 2),
+          inset: len(0, 1),
+          t: len(0.25, 1.5),
+        }),
         (style, width, height, setback, v) => {
-          const spec = { style, casingWidth: v.cw, casingThickness: v.ct, reveal: v.reveal, stoolHorn: v.horn, stoolProjection: v.proj, apronInset: v.inset, apronReturns: true, extensionThickness: v.t };
+          const spec = {
+            style,
+            casingWidth: v.cw,
+            casingThickness: v.ct,
+            reveal: v.reveal,
+            stoolHorn: v.horn,
+            stoolProjection: v.proj,
+            apronInset: v.inset,
+            apronReturns: true,
+            extensionThickness: v.t,
+          };
           const opening = { width, height, setback };
           const pieces = cutList(opening, spec);
           const want = expected(opening, spec);

@@ -26,7 +26,13 @@ function stoolAndApron(o: ResolvedOpening, s: ResolvedSpec): ExactPiece[] {
   const apron = outer.sub(s.apronInset.mul(2));
   if (apron.lte(0)) throw new Error("apronInset: apron inset leaves no apron for this opening width");
   const pieces: ExactPiece[] = [
-    { part: "casing-leg", material: "casing", quantity: 2, length: o.height.add(s.reveal).add(s.casingWidth), ends: ["square", "miter"] },
+    {
+      part: "casing-leg",
+      material: "casing",
+      quantity: 2,
+      length: o.height.add(s.reveal).add(s.casingWidth),
+      ends: ["square", "miter"],
+    },
     { part: "casing-head", material: "casing", quantity: 1, length: outer, ends: MITERS },
     {
       part: "stool",
@@ -40,11 +46,13 @@ function stoolAndApron(o: ResolvedOpening, s: ResolvedSpec): ExactPiece[] {
   ];
   // A return's long point equals the apron's thickness: it turns the profile back to the wall.
   if (s.apronReturns) {
-    pieces.push({ part: "apron-return", material: "apron", quantity: 2, length: s.casingThickness, ends: ["miter", "square"] });
+    const ends: [End, End] = ["miter", "square"];
+    pieces.push({ part: "apron-return", material: "apron", quantity: 2, length: s.casingThickness, ends });
   }
   if (o.setback.gt(0)) {
+    const side = o.height.add(s.extensionThickness);
     pieces.push(
-      { part: "extension-side", material: "extension", quantity: 2, length: o.height.add(s.extensionThickness), width: o.setback, ends: SQUARE },
+      { part: "extension-side", material: "extension", quantity: 2, length: side, width: o.setback, ends: SQUARE },
       { part: "extension-head", material: "extension", quantity: 1, length: o.width, width: o.setback, ends: SQUARE },
     );
   }
@@ -54,8 +62,9 @@ function stoolAndApron(o: ResolvedOpening, s: ResolvedSpec): ExactPiece[] {
 /** Picture-frame: four casing pieces mitered at every corner; H is jamb to jamb. */
 function pictureFrame(o: ResolvedOpening, s: ResolvedSpec): ExactPiece[] {
   const across = o.width.add(s.reveal.mul(2)).add(s.casingWidth.mul(2));
+  const leg = o.height.add(s.reveal.mul(2)).add(s.casingWidth.mul(2));
   const pieces: ExactPiece[] = [
-    { part: "casing-leg", material: "casing", quantity: 2, length: o.height.add(s.reveal.mul(2)).add(s.casingWidth.mul(2)), ends: MITERS },
+    { part: "casing-leg", material: "casing", quantity: 2, length: leg, ends: MITERS },
     { part: "casing-head", material: "casing", quantity: 1, length: across, ends: MITERS },
     { part: "casing-bottom", material: "casing", quantity: 1, length: across, ends: MITERS },
   ];
@@ -80,7 +89,11 @@ export function exactCutList(opening: Opening, spec: TrimSpec): ExactPiece[] {
 const recent = new Map<string, CutPiece[]>();
 const RECENT_LIMIT = 512;
 
-const copy = (p: CutPiece): CutPiece => ({ ...p, ends: [p.ends[0], p.ends[1]] });
+function copy(p: CutPiece): CutPiece {
+  const out: CutPiece = { part: p.part, material: p.material, quantity: p.quantity, length: p.length, ends: [p.ends[0], p.ends[1]] };
+  if (p.width !== undefined) out.width = p.width;
+  return out;
+}
 
 /**
  * Cut list for one opening, lengths and widths rounded to the nearest 1/16
@@ -93,7 +106,8 @@ export function cutList(opening: Opening, spec: TrimSpec): CutPiece[] {
   const hit = key === undefined ? undefined : recent.get(key);
   if (hit) return hit.map(copy);
   const pieces = exactCutList(opening, spec).map((p) => {
-    const piece: CutPiece = { part: p.part, material: p.material, quantity: p.quantity, length: inchesOut(p.length), ends: [p.ends[0], p.ends[1]] };
+    const { part, material, quantity } = p;
+    const piece: CutPiece = { part, material, quantity, length: inchesOut(p.length), ends: [p.ends[0], p.ends[1]] };
     if (p.width !== undefined) piece.width = inchesOut(p.width);
     return piece;
   });

@@ -31,7 +31,8 @@ export function jobPieces(lines: readonly TakeoffLine[]): { piece: CutPiece; cou
     const key = typeof line === "object" && line !== null ? openingSpecKey(line.opening, line.spec) : undefined;
     const group = key === undefined ? undefined : groups.get(key);
     if (group) {
-      group.quantity += parseOrThrow(quantitySchema, line.quantity, `lines[${i}].quantity`);
+      const q = line.quantity;
+      group.quantity += Number.isInteger(q) && q >= 0 ? q : parseOrThrow(quantitySchema, q, `lines[${i}].quantity`);
       return;
     }
     const valid = parseOrThrow(takeoffLineSchema, line, `lines[${i}]`);
@@ -60,7 +61,6 @@ export function pieceDemand(lines: readonly TakeoffLine[]): PieceDemand[] {
       merged.set(key, entry);
     }
   }
-  return [...merged.values()].sort(
-    (a, b) => MATERIALS.indexOf(a.material) - MATERIALS.indexOf(b.material) || (a.width ?? 0) - (b.width ?? 0) || b.length - a.length,
-  );
+  const rank = (d: PieceDemand) => MATERIALS.indexOf(d.material);
+  return [...merged.values()].sort((a, b) => rank(a) - rank(b) || (a.width ?? 0) - (b.width ?? 0) || b.length - a.length);
 }

@@ -13,7 +13,10 @@ const SPEC_FIELDS = [
   "extensionThickness",
 ] as const;
 
-const part = (v: unknown) => `${typeof v}:${String(v)}`;
+/** Numbers as themselves; anything else tagged with its type (numbers never contain ":"). */
+function part(v: unknown): string {
+  return typeof v === "number" ? String(v) : `${typeof v}:${String(v)}`;
+}
 
 /**
  * Identity of an opening+spec for reuse of its cut list: every field that
@@ -24,5 +27,8 @@ export function openingSpecKey(opening: Opening, spec: TrimSpec): string | undef
   if (typeof opening !== "object" || opening === null || typeof spec !== "object" || spec === null) return undefined;
   const o = opening as unknown as Record<string, unknown>;
   const s = spec as unknown as Record<string, unknown>;
-  return [...OPENING_FIELDS.map((f) => part(o[f])), ...SPEC_FIELDS.map((f) => part(s[f]))].join("|");
+  let key = "";
+  for (const f of OPENING_FIELDS) key += `${part(o[f])}|`;
+  for (const f of SPEC_FIELDS) key += `${part(s[f])}|`;
+  return key;
 }

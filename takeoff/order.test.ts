@@ -11,7 +11,8 @@ const lines: TakeoffLine[] = [
   { opening: { width: 24, height: 36, setback: 4 }, spec: pf, quantity: 3 },
   { opening: { width: 48, height: 60, setback: 1.1875 }, spec: pf, quantity: 2 },
 ];
-const feet = (ft: number[], price: number, width?: number) => ft.map((f) => ({ length: f * 12, price: Math.round(f * price * 100) / 100, ...(width ? { width } : {}) }));
+const feet = (ft: number[], perFoot: number, width?: number) =>
+  ft.map((f) => ({ length: f * 12, price: Math.round(f * perFoot * 100) / 100, ...(width ? { width } : {}) }));
 const catalog: StockCatalog = {
   casing: feet([7, 8, 10, 12, 14, 16], 1.39),
   stool: feet([8, 10, 12], 3.1),
@@ -21,6 +22,7 @@ const catalog: StockCatalog = {
 };
 
 describe("orderMaterials", () => {
+  // Common practice: rip a board to one width, then crosscut; the narrowest board wide enough wastes least.
   it("plans every material; extensions grouped by width, each from the narrowest board wide enough", async () => {
     const orders = await orderMaterials(lines, catalog, { kerf: 0.125 });
     expect(orders.map((o) => [o.material, o.width, o.stockWidth])).toEqual([

@@ -43,7 +43,9 @@ function groupsFor(material: Material, pieces: PieceDemand[], stock: readonly St
     const wide = withWidth.filter((s) => (s.width ?? 0) >= width);
     if (wide.length === 0) {
       const widest = Math.max(...withWidth.map((s) => s.width ?? 0));
-      throw new Error(`${material} pieces ${formatLength(width)} wide: no stock item is wide enough (widest is ${formatLength(widest)})`);
+      throw new Error(
+        `${material} pieces ${formatLength(width)} wide: no stock item is wide enough (widest is ${formatLength(widest)})`,
+      );
     }
     const stockWidth = Math.min(...wide.map((s) => s.width ?? 0));
     return { material, width, stockWidth, stock: wide.filter((s) => s.width === stockWidth), pieces: group };
@@ -103,7 +105,9 @@ export function summarizeOrders(orders: readonly MaterialOrder[]): MaterialOrder
     const mine = orders.filter((o) => o.material === material);
     if (mine.length === 0) return [];
     const perLength = new Map<number, number>();
-    for (const o of mine) for (const b of o.plan.boards) perLength.set(b.stockLength, (perLength.get(b.stockLength) ?? 0) + b.count);
+    for (const b of mine.flatMap((o) => o.plan.boards)) {
+      perLength.set(b.stockLength, (perLength.get(b.stockLength) ?? 0) + b.count);
+    }
     const cost = sumFractions(mine.map((o) => exact(o.plan.cost)));
     const bound = sumFractions(mine.map((o) => exact(o.plan.lowerBound.cost)));
     return [{

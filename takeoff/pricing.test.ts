@@ -14,6 +14,7 @@ const lines: TakeoffLine[] = [
   { opening: { width: 24, height: 24, setback: 0 }, spec: { style: "picture-frame", casingWidth: 2.5, casingThickness: 0.75 }, quantity: 3 },
 ];
 
+// Expected figures are worked by hand from the stated rates; the rates themselves are the contractor's own.
 describe("labour", () => {
   it("minutes per opening by style plus minutes per linear foot of extension", () => {
     const extensionFeet = (2 * 111.5) / 12;
@@ -35,6 +36,7 @@ describe("bid", () => {
     expect(materialCost([{ plan: { cost: 10.1 } }, { plan: { cost: 20.2 } }])).toBe(30.3);
   });
 
+  // Common practice: many US states tax materials a contractor resells but not installation labour.
   it("marks up the subtotal and taxes the marked-up materials only by default", () => {
     const bid = bidTotal({ material: 1000, labour: 500 }, { markup: 0.15, taxRate: 0.0825 });
     expect(bid).toEqual({ material: 1000, labour: 500, subtotal: 1500, markup: 225, tax: 94.88, total: 1819.88 });

@@ -19,7 +19,8 @@ describe("takeoffTotals", () => {
     expect(totals.map((t) => t.material)).toEqual(["casing", "stool", "apron", "extension"]);
     // stool-and-apron casing: 2 legs 25 7/8 + head 35 1/4; picture-frame: 2 legs 66 3/4 + 2 × 42 3/4
     const casing = totals[0];
-    expect(casing).toEqual({ material: "casing", pieces: 3 * 3 + 2 * 4, linearInches: 3 * (2 * 25.875 + 35.25) + 2 * (2 * 66.75 + 2 * 42.75), linearFeet: (3 * (2 * 25.875 + 35.25) + 2 * (2 * 66.75 + 2 * 42.75)) / 12 });
+    const inches = 3 * (2 * 25.875 + 35.25) + 2 * (2 * 66.75 + 2 * 42.75);
+    expect(casing).toEqual({ material: "casing", pieces: 3 * 3 + 2 * 4, linearInches: inches, linearFeet: inches / 12 });
     expect(totals[3]).toMatchObject({ material: "extension", pieces: 9, linearInches: 3 * (2 * 24 + 30) });
   });
 

@@ -20,7 +20,10 @@ export const wallBuildUpSchema = z.object({
   stud: z.enum(["2x4", "2x6", "2x8"], { error: 'stud must be "2x4", "2x6" or "2x8"' }),
   wallboard: z.enum(["1/4", "3/8", "1/2", "5/8"], { error: "wallboard must be 1/4, 3/8, 1/2 or 5/8" }),
   wallboardLayers: z.number({ error: "wallboard layers must be a number" }).int().min(1).optional(),
-  sheathing: z.number({ error: "sheathing must be a finite number" }).min(0, { error: "sheathing must not be negative" }).optional(),
+  sheathing: z
+    .number({ error: "sheathing must be a finite number" })
+    .min(0, { error: "sheathing must not be negative" })
+    .optional(),
   frameDepth: z.number({ error: "frame depth must be a finite number" }).gt(0, { error: "frame depth must be greater than 0" }),
 });
 

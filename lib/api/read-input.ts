@@ -1,4 +1,6 @@
 import type { z } from "zod";
+import type { NextRequest } from "next/server";
+import { versionParam } from "@/lib/validators/plans";
 import { AppError, fieldErrors, invalid } from "@/lib/errors";
 
 const MAX_BODY_BYTES = 64 * 1024;
@@ -27,4 +29,11 @@ export function parseId(value: string | undefined, what: string): string {
     throw new AppError(404, `No such ${what}.`);
   }
   return value;
+}
+
+/** `?version=N` on a DELETE: the version the client last saw, so a delete can be stale too. */
+export function readVersion(req: NextRequest): number {
+  const parsed = versionParam.safeParse(req.nextUrl.searchParams.get("version") ?? undefined);
+  if (!parsed.success) throw invalid({ version: "Give ?version=N: reload and try again." });
+  return parsed.data;
 }

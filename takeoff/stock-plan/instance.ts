@@ -60,7 +60,8 @@ export function buildInstance(demand: readonly Demand[], stock: readonly StockIt
   const kerf = exact(parseOrThrow(planOptionsSchema, opts, "opts").kerf);
   const stocks = stock.map((s, i) => {
     const v = parseOrThrow(stockItemSchema, s, `stock[${i}]`);
-    return { length: exact(v.length), lengthNum: v.length, price: exact(v.price), priceNum: v.price, cap: 0, capLb: 0 };
+    const [length, price] = [exact(v.length), exact(v.price)];
+    return { length, lengthNum: v.length, price, priceNum: v.price, cap: 0, capLb: 0 };
   });
   const merged = new Map<string, { length: Fraction; lengthNum: number; demand: number }>();
   demand.forEach((d, i) => {

@@ -5,8 +5,8 @@ import { planStock } from "./plan-stock";
 
 /** Deterministic job-sized demand: 40 lengths, thousands of pieces, six stock lengths at uneven prices. */
 function job() {
-  let seed = 20240611;
-  const next = () => (seed = (seed * 48271) % 2147483647) / 2147483647;
+  let state = 20240611;
+  const next = () => (state = (state * 48271) % 2147483647) / 2147483647;
   const demand = Array.from({ length: 40 }, () => ({ length: Math.round((14 + next() * 76) * 16) / 16, quantity: 20 + Math.floor(next() * 180) }));
   const stock = [
     [7, 1.49], [8, 1.39], [10, 1.36], [12, 1.41], [14, 1.52], [16, 1.58],

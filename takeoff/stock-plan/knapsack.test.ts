@@ -75,7 +75,7 @@ describe("bounded knapsack", () => {
           expect(k.value(cap)).toBeCloseTo(r.ObjectiveValue, 6);
         },
       ),
-      { numRuns: 40 },
+      { numRuns: 25 },
     );
   });
 

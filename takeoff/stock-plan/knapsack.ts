@@ -58,7 +58,15 @@ interface Table {
   readBack(cap: number, out: Int32Array): void;
 }
 
-function unbounded(active: number[], weights: ArrayLike<number>, values: ArrayLike<number>, _b: ArrayLike<number>, maxCap: number): Table {
+type Solver = (
+  active: number[],
+  weights: ArrayLike<number>,
+  values: ArrayLike<number>,
+  bounds: ArrayLike<number>,
+  maxCap: number,
+) => Table;
+
+const unbounded: Solver = (active, weights, values, _bounds, maxCap) => {
   const dp = new Float64Array(maxCap + 1);
   const last = new Int32Array(maxCap + 1).fill(-1);
   // Item by item: an optimal multiset can be taken in item order, and last[c]
@@ -84,9 +92,9 @@ function unbounded(active: number[], weights: ArrayLike<number>, values: ArrayLi
       }
     },
   };
-}
+};
 
-function chunked(active: number[], weights: ArrayLike<number>, values: ArrayLike<number>, bounds: ArrayLike<number>, maxCap: number): Table {
+const chunked: Solver = (active, weights, values, bounds, maxCap) => {
   const width = maxCap + 1;
   const chunkItem: number[] = [];
   const chunkCopies: number[] = [];
@@ -126,4 +134,4 @@ function chunked(active: number[], weights: ArrayLike<number>, values: ArrayLike
       }
     },
   };
-}
+};

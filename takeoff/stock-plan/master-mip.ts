@@ -23,8 +23,10 @@ export interface MipLimits {
  * into the objective makes it fractional and the proof far slower.
  */
 export function integerCosts(inst: Instance, costStep: Fraction, lengthStep: Fraction): number[] {
-  const [values, step] = costStep.n === 0n ? [inst.stocks.map((s) => s.length), lengthStep] : [inst.stocks.map((s) => s.price), costStep];
-  return values.map((v) => {
+  const free = costStep.n === 0n;
+  const step = free ? lengthStep : costStep;
+  return inst.stocks.map((s) => {
+    const v = free ? s.length : s.price;
     const q = v.div(step);
     if (q.d !== 1n) throw new Error("stock plan: objective is not a whole multiple of its step");
     return Number(q.n);

@@ -14,18 +14,25 @@ function subtract(residual: number[], c: Column, count: number): void {
  * every whole board it uses, then commit one board of the pattern the LP uses
  * most and repeat on what is left. Each dive commits at least one board and
  * the residual after the first rounding is only a few boards, so this is
- * short; it is the classic residual heuristic for cutting stock (Wäscher &
- * Gau 1996, "Heuristics for the integer one-dimensional cutting stock
+ * short. It belongs to the LP-based residual heuristics compared by Wäscher
+ * & Gau (1996, "Heuristics for the integer one-dimensional cutting stock
  * problem: a computational study", OR Spektrum 18).
  */
-export function diveResidual(inst: Instance, pool: Column[], poolKeys: Set<string>, demand: readonly number[], objective: Objective): CountedColumn[] {
+export function diveResidual(
+  inst: Instance,
+  pool: Column[],
+  poolKeys: Set<string>,
+  demand: readonly number[],
+  objective: Objective,
+): CountedColumn[] {
   const out: CountedColumn[] = [];
   const residual = [...demand];
   while (residual.some((r) => r > 0)) {
     const cols: Column[] = [];
     const keys = new Set<string>();
     addUnique(cols, keys, homogeneousColumns(inst, residual));
-    addUnique(cols, keys, pool.map((c) => capColumn(c, residual)));
+    const touching = pool.filter((c) => c.a.some((v, i) => v > 0 && (residual[i] ?? 0) > 0));
+    addUnique(cols, keys, touching.map((c) => capColumn(c, residual)));
     const lp = columnGeneration(inst, cols, keys, residual, objective, RESIDUAL_LIMITS);
     addUnique(pool, poolKeys, cols);
     let committed = false;

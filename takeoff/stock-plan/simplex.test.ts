@@ -49,7 +49,7 @@ describe("restricted master LP (own revised simplex) against HiGHS LP (highs pac
         expect(dualObjective).toBeCloseTo(ref.ObjectiveValue, 6);
         for (const y of sol.y) expect(y).toBeGreaterThanOrEqual(-1e-9);
       }),
-      { numRuns: 150 },
+      { numRuns: 100 },
     );
   });
 });

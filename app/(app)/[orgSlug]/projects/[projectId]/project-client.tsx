@@ -1,6 +1,5 @@
 "use client";
 
-import Link from "next/link";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { FormEvent } from "react";
 import { Button } from "@/components/ui/button";
@@ -39,10 +38,7 @@ export function ProjectDetail({ orgSlug, initial, canWrite }: { orgSlug: string;
   return (
     <div className="space-y-6">
       <div>
-        <Link href={`/${orgSlug}/projects`} className="text-sm text-spruce-700 underline">
-          ← Projects
-        </Link>
-        <h1 className="mt-2 flex flex-wrap items-center gap-3 text-2xl font-bold">
+        <h1 className="flex flex-wrap items-center gap-3 text-2xl font-bold">
           {project.name} <StatusBadge status={project.status} />
           {project.archivedAt && <span className="text-sm font-normal text-graphite-600">(archived)</span>}
         </h1>

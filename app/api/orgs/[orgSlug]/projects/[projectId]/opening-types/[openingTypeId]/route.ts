@@ -1,0 +1,26 @@
+// PATCH /api/orgs/[orgSlug]/projects/[projectId]/opening-types/[openingTypeId] — edit (version-checked); DELETE ?version=N
+import { NextResponse } from "next/server";
+import { deleteOpeningType, updateOpeningType } from "@/db/queries/opening-types";
+import { withOrg } from "@/lib/api/with-org";
+import { projectScope } from "@/lib/api/project-scope";
+import { parseId, readJson, readVersion } from "@/lib/api/read-input";
+import { openingTypeUpdateSchema } from "@/lib/validators/plans";
+
+type Params = { orgSlug: string; projectId: string; openingTypeId: string };
+
+export const PATCH = withOrg<Params>(
+  async ({ req, params, org }) => {
+    const scope = projectScope(org, params);
+    const id = parseId(params.openingTypeId, "opening type");
+    return NextResponse.json({ openingType: await updateOpeningType(scope, id, await readJson(req, openingTypeUpdateSchema)) });
+  },
+  { permission: "plans.write" },
+);
+
+export const DELETE = withOrg<Params>(
+  async ({ req, params, org }) => {
+    await deleteOpeningType(projectScope(org, params), parseId(params.openingTypeId, "opening type"), readVersion(req));
+    return new NextResponse(null, { status: 204 });
+  },
+  { permission: "plans.write" },
+);

@@ -1,0 +1,26 @@
+// PATCH /api/orgs/[orgSlug]/projects/[projectId]/unit-types/[unitTypeId] — rename or recount; DELETE — remove
+import { NextResponse } from "next/server";
+import { deleteUnitType, updateUnitType } from "@/db/queries/unit-types";
+import { withOrg } from "@/lib/api/with-org";
+import { projectScope } from "@/lib/api/project-scope";
+import { parseId, readJson } from "@/lib/api/read-input";
+import { unitTypeUpdateSchema } from "@/lib/validators/plans";
+
+type Params = { orgSlug: string; projectId: string; unitTypeId: string };
+
+export const PATCH = withOrg<Params>(
+  async ({ req, params, org }) => {
+    const scope = projectScope(org, params);
+    const id = parseId(params.unitTypeId, "unit type");
+    return NextResponse.json({ unitType: await updateUnitType(scope, id, await readJson(req, unitTypeUpdateSchema)) });
+  },
+  { permission: "plans.write" },
+);
+
+export const DELETE = withOrg<Params>(
+  async ({ params, org }) => {
+    await deleteUnitType(projectScope(org, params), parseId(params.unitTypeId, "unit type"));
+    return new NextResponse(null, { status: 204 });
+  },
+  { permission: "plans.write" },
+);

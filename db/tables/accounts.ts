@@ -1,0 +1,76 @@
+import { sql } from "drizzle-orm";
+import { check, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import type { TrimSpec } from "@/takeoff";
+import { createdAt } from "./common";
+
+export const roleEnum = pgEnum("member_role", ["admin", "estimator", "project_manager"]);
+
+export const users = pgTable(
+  "users",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    name: text("name").notNull(),
+    // Stored lower-cased so sign-in and invitations match however people type it.
+    email: text("email").notNull(),
+    passwordHash: text("password_hash").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("users_email_key").on(t.email), check("users_email_lower", sql`${t.email} = lower(${t.email})`)],
+);
+
+export const organisations = pgTable(
+  "organisations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    name: text("name").notNull(),
+    slug: text("slug").notNull(),
+    // The company's usual trim spec; a new opening type starts from it. Null = the engine's defaults.
+    trimDefaults: jsonb("trim_defaults").$type<TrimSpec>(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("organisations_slug_key").on(t.slug)],
+);
+
+export const memberships = pgTable(
+  "memberships",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orgId: uuid("org_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: roleEnum("role").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("memberships_org_user_key").on(t.orgId, t.userId), index("memberships_user_idx").on(t.userId)],
+);
+
+export const invitations = pgTable(
+  "invitations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    // Kept (set null) when the organisation is removed, so the link can say why it no longer works.
+    orgId: uuid("org_id").references(() => organisations.id, { onDelete: "set null" }),
+    email: text("email").notNull(),
+    role: roleEnum("role").notNull(),
+    // SHA-256 of the token; the token itself only ever exists in the e-mail.
+    tokenHash: text("token_hash").notNull(),
+    invitedBy: uuid("invited_by").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    usedAt: timestamp("used_at", { withTimezone: true }),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("invitations_token_hash_key").on(t.tokenHash), index("invitations_org_idx").on(t.orgId)],
+);
+
+/** Failed sign-ins counted per key ("email:…" or "ip:…"), so throttling holds across server instances. */
+export const signInThrottle = pgTable("sign_in_throttle", {
+  key: text("key").primaryKey(),
+  failures: integer("failures").notNull().default(0),
+  firstFailureAt: timestamp("first_failure_at", { withTimezone: true }).notNull().defaultNow(),
+  blockedUntil: timestamp("blocked_until", { withTimezone: true }),
+});
+

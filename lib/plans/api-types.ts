@@ -1,0 +1,99 @@
+/**
+ * Shapes the plans API answers with, shared by the route handlers and the client views.
+ * Coordinates and page sizes are PDF user-space units (ISO 32000-1); lengths are inches.
+ */
+import type { TrimSpec, WallBuildUp } from "@/takeoff";
+
+export interface UnitTypeView {
+  id: string;
+  name: string;
+  /** How many of this layout the job has. */
+  count: number;
+}
+
+export interface PlanSetView {
+  id: string;
+  name: string;
+  sizeBytes: number;
+  pageCount: number;
+  createdAt: string;
+}
+
+export interface CalibrationPointsView {
+  ax: number;
+  ay: number;
+  bx: number;
+  by: number;
+  /** The real length between the points, inches. */
+  inches: number;
+}
+
+export interface SheetView {
+  id: string;
+  planSetId: string;
+  planSetName: string;
+  pageNumber: number;
+  label: string;
+  unitTypeId: string | null;
+  /** Unrotated page box size, PDF units. */
+  width: number;
+  height: number;
+  /** Page /Rotate: 0, 90, 180 or 270 (clockwise, as displayed). */
+  rotation: number;
+  userUnit: number;
+  scaleRatio: number | null;
+  scaleLabel: string | null;
+  calibrationPoints: CalibrationPointsView | null;
+  /** Real inches per PDF unit in effect, or null when the sheet is not calibrated. */
+  inchesPerUnit: number | null;
+  /** Set when picked points and the chosen scale disagree by more than 1%. */
+  scaleMismatchPercent: number | null;
+  tagCount: number;
+  version: number;
+}
+
+export interface OpeningTypeView {
+  id: string;
+  mark: string;
+  width: number;
+  height: number;
+  setback: number;
+  wallBuildUp: WallBuildUp | null;
+  trimSpec: TrimSpec;
+  notes: string | null;
+  version: number;
+}
+
+export interface TagView {
+  id: string;
+  sheetId: string;
+  openingTypeId: string;
+  x: number;
+  y: number;
+  measuredWidth: number | null;
+  /** True when a measured width differs from the type's width by more than 1 in. */
+  widthMismatch: boolean;
+  version: number;
+}
+
+/** Opening counts keyed by opening type id. */
+export type CountByType = Record<string, number>;
+
+export interface CountsView {
+  sheets: { sheetId: string; label: string; unitTypeId: string | null; byType: CountByType; total: number }[];
+  unitTypes: { unitTypeId: string; name: string; unitCount: number; perUnit: CountByType; allUnits: CountByType }[];
+  /** Tags on sheets without a unit type: common areas, counted once. */
+  commonAreas: CountByType;
+  /** Per unit type (tags × unit count) plus common areas. */
+  job: CountByType;
+  jobTotal: number;
+}
+
+/** A refused stale edit: 409 with the row as it is now, so the client can show the latest state. */
+export interface StaleEdit<T> {
+  error: string;
+  current: T | null;
+}
+
+/** What the upload route hands back to the browser once the server has checked the PDF. */
+export type PlanUploadResult = { ok: true; planSetId: string; pageCount: number } | { ok: false; error: string };

@@ -3,10 +3,11 @@
 # `npm test` sources it too, so one suite run by hand sees exactly what the full run sees.
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 pg_up
-ensure_database miterwise_test
+TEST_DB="${MITERWISE_TEST_DB:-miterwise_test}" # a second name lets two people test side by side
+ensure_database "$TEST_DB"
 
 OFF="$(checkout_offset)"
-export DATABASE_URL="$(db_url miterwise_test)"
+export DATABASE_URL="$(db_url "$TEST_DB")"
 export APP_PORT="$((31000 + OFF))" SMTP_PORT="$((32000 + OFF))"
 export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
 export NEXTAUTH_SECRET="miterwise-test-secret-not-for-production"

@@ -5,7 +5,7 @@ source "$(dirname "$0")/lib.sh"
 ensure_chromium
 ensure_node_modules
 source "$ROOT/scripts/test-env.sh"
-recreate_database miterwise_test >/dev/null
+recreate_database "$TEST_DB" >/dev/null
 T="$MITERWISE_DATA_DIR"
 rm -rf "$T"; mkdir -p "$T/results"
 cd "$ROOT"

@@ -12,6 +12,15 @@ import * as membersRoute from "@/app/api/orgs/[orgSlug]/members/route";
 import * as memberRoute from "@/app/api/orgs/[orgSlug]/members/[memberId]/route";
 import * as invitationsRoute from "@/app/api/orgs/[orgSlug]/invitations/route";
 import * as invitationRoute from "@/app/api/orgs/[orgSlug]/invitations/[invitationId]/route";
+import * as unitTypesRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/unit-types/route";
+import * as unitTypeRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/unit-types/[unitTypeId]/route";
+import * as sheetsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/sheets/route";
+import * as sheetRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/sheets/[sheetId]/route";
+import * as openingTypesRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/opening-types/route";
+import * as openingTypeRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/opening-types/[openingTypeId]/route";
+import * as tagsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/route";
+import * as tagRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/[tagId]/route";
+import * as countsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/counts/route";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
 import { makeOrg, unique, type World } from "./helpers/world";
@@ -31,6 +40,8 @@ interface RouteCase {
   body?: (w: World) => unknown;
   allowed: Role[];
   okStatus: number;
+  /** The request path, where the handler reads the query string (e.g. `?version=1`). */
+  path?: string;
 }
 
 const org = (w: World) => ({ orgSlug: w.org.slug });
@@ -47,6 +58,28 @@ const routes: RouteCase[] = [
   { name: "invite", handler: invitationsRoute.POST, method: "POST", params: org, body: () => ({ email: `new-${unique()}@example.test`, role: "estimator" }), allowed: ["admin"], okStatus: 201 },
   { name: "withdraw an invitation", handler: invitationRoute.DELETE, method: "DELETE", params: (w) => ({ ...org(w), invitationId: w.invitation.id }), allowed: ["admin"], okStatus: 204 },
 ];
+
+const proj = (w: World) => ({ ...org(w), projectId: w.project.id });
+const readers: Role[] = ["admin", "estimator", "project_manager"];
+const writers: Role[] = ["admin", "estimator"];
+routes.push(
+  { name: "list unit types", handler: unitTypesRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
+  { name: "add a unit type", handler: unitTypesRoute.POST, method: "POST", params: proj, body: () => ({ name: `Type B ${unique()}`, count: 4 }), allowed: writers, okStatus: 201 },
+  { name: "edit a unit type", handler: unitTypeRoute.PATCH, method: "PATCH", params: (w) => ({ ...proj(w), unitTypeId: w.plans.unitType.id }), body: () => ({ count: 30 }), allowed: writers, okStatus: 200 },
+  { name: "delete a unit type", handler: unitTypeRoute.DELETE, method: "DELETE", params: (w) => ({ ...proj(w), unitTypeId: w.plans.unitType.id }), allowed: writers, okStatus: 204 },
+  { name: "list sheets", handler: sheetsRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
+  { name: "read a sheet", handler: sheetRoute.GET, method: "GET", params: (w) => ({ ...proj(w), sheetId: w.plans.sheet.id }), allowed: readers, okStatus: 200 },
+  { name: "calibrate a sheet", handler: sheetRoute.PATCH, method: "PATCH", params: (w) => ({ ...proj(w), sheetId: w.plans.sheet.id }), body: () => ({ version: 1, scale: { ratio: 48, label: '1/4" = 1\'-0"' } }), allowed: writers, okStatus: 200 },
+  { name: "list opening types", handler: openingTypesRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
+  { name: "add an opening type", handler: openingTypesRoute.POST, method: "POST", params: proj, body: () => ({ mark: "W9", width: "35 1/2", height: "59 1/2", setback: "9/16" }), allowed: writers, okStatus: 201 },
+  { name: "edit an opening type", handler: openingTypeRoute.PATCH, method: "PATCH", params: (w) => ({ ...proj(w), openingTypeId: w.plans.w1.id }), body: () => ({ version: 1, width: "36 1/4" }), allowed: writers, okStatus: 200 },
+  { name: "delete an opening type", handler: openingTypeRoute.DELETE, method: "DELETE", path: "/api/x?version=1", params: (w) => ({ ...proj(w), openingTypeId: w.plans.w2.id }), allowed: writers, okStatus: 204 },
+  { name: "list tags", handler: tagsRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
+  { name: "place a tag", handler: tagsRoute.POST, method: "POST", params: proj, body: (w) => ({ sheetId: w.plans.sheet.id, openingTypeId: w.plans.w2.id, x: 10, y: 20 }), allowed: writers, okStatus: 201 },
+  { name: "move a tag", handler: tagRoute.PATCH, method: "PATCH", params: (w) => ({ ...proj(w), tagId: w.plans.tag.id }), body: () => ({ version: 1, x: 500, y: 320 }), allowed: writers, okStatus: 200 },
+  { name: "delete a tag", handler: tagRoute.DELETE, method: "DELETE", path: "/api/x?version=1", params: (w) => ({ ...proj(w), tagId: w.plans.tag.id }), allowed: writers, okStatus: 204 },
+  { name: "read counts", handler: countsRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
+);
 
 const expectedRefusal = (actor: Actor) => (actor === "anonymous" ? 401 : actor === "outsider" ? 404 : 403);
 
@@ -70,7 +103,7 @@ describe.each(routes)("route: $name", (route) => {
     const before = await snapshot();
     const res = await call(route.handler, {
       method: route.method,
-      path: "/api/x",
+      path: route.path ?? "/api/x",
       params: route.params(home),
       body: route.body?.(home),
       cookie: await cookieFor(actor),
@@ -114,6 +147,8 @@ describe("server action: createProjectAction", () => {
   });
 });
 
+const byName = (name: string) => routes.find((r) => r.name === name)!;
+
 describe("ids from another organisation, through your own slug", () => {
   const foreign: { name: string; route: RouteCase }[] = [
     { name: "read their project", route: { ...routes[2]!, params: (w) => ({ ...org(w), projectId: other.project.id }) } },
@@ -121,12 +156,20 @@ describe("ids from another organisation, through your own slug", () => {
     { name: "change their member's role", route: { ...routes[6]!, params: (w) => ({ ...org(w), memberId: other.spare.membershipId }) } },
     { name: "remove their member", route: { ...routes[7]!, params: (w) => ({ ...org(w), memberId: other.spare.membershipId }) } },
     { name: "withdraw their invitation", route: { ...routes[10]!, params: (w) => ({ ...org(w), invitationId: other.invitation.id }) } },
+    { name: "list their project's sheets", route: { ...byName("list sheets"), params: (w) => ({ ...org(w), projectId: other.project.id }) } },
+    { name: "read their sheet", route: { ...byName("read a sheet"), params: (w) => ({ ...proj(w), sheetId: other.plans.sheet.id }) } },
+    { name: "calibrate their sheet", route: { ...byName("calibrate a sheet"), params: (w) => ({ ...proj(w), sheetId: other.plans.sheet.id }) } },
+    { name: "edit their unit type", route: { ...byName("edit a unit type"), params: (w) => ({ ...proj(w), unitTypeId: other.plans.unitType.id }) } },
+    { name: "edit their opening type", route: { ...byName("edit an opening type"), params: (w) => ({ ...proj(w), openingTypeId: other.plans.w1.id }) } },
+    { name: "move their tag", route: { ...byName("move a tag"), params: (w) => ({ ...proj(w), tagId: other.plans.tag.id }) } },
+    { name: "delete their tag", route: { ...byName("delete a tag"), params: (w) => ({ ...proj(w), tagId: other.plans.tag.id }) } },
+    { name: "read their counts", route: { ...byName("read counts"), params: (w) => ({ ...org(w), projectId: other.project.id }) } },
   ];
   it.each(foreign)("$name → 404, nothing changed", async ({ route }) => {
     const before = await snapshot();
     const res = await call(route.handler, {
       method: route.method,
-      path: "/api/x",
+      path: route.path ?? "/api/x",
       params: route.params(home),
       body: route.body?.(home),
       cookie: await sessionCookie(home.people.admin),

@@ -22,8 +22,13 @@ export class FilePartExtractor extends Transform {
   private readonly delimiter: Buffer;
   private state: "preamble" | "headers" | "file" | "skip" | "done" = "preamble";
   private pending = Buffer.alloc(0);
+  private seen = 0;
 
-  constructor(boundary: string) {
+  /** `maxBytes` bounds the whole body, so junk parts beside the file cannot stream in forever. */
+  constructor(
+    boundary: string,
+    private readonly maxBytes = Number.POSITIVE_INFINITY,
+  ) {
     super();
     this.dashBoundary = Buffer.from(`--${boundary}`, "latin1");
     this.delimiter = Buffer.from(`\r\n--${boundary}`, "latin1");
@@ -31,6 +36,8 @@ export class FilePartExtractor extends Transform {
 
   override _transform(chunk: Buffer, _encoding: BufferEncoding, callback: TransformCallback) {
     try {
+      this.seen += chunk.length;
+      if (this.seen > this.maxBytes) throw new MultipartError("The body is larger than the file it carries", 413);
       this.pending = this.pending.length ? Buffer.concat([this.pending, chunk]) : chunk;
       this.advance();
       callback();
@@ -39,8 +46,10 @@ export class FilePartExtractor extends Transform {
     }
   }
 
+  // Ending early is not an error here: after a dropped connection the caller still wants what was extracted,
+  // and checks `complete` itself.
   override _flush(callback: TransformCallback) {
-    callback(this.complete ? null : new MultipartError("The multipart body ended before the file part did"));
+    callback();
   }
 
   private advance() {
@@ -97,7 +106,14 @@ export class FilePartExtractor extends Transform {
   }
 }
 
-export class MultipartError extends Error {}
+export class MultipartError extends Error {
+  constructor(
+    message: string,
+    readonly status = 400,
+  ) {
+    super(message);
+  }
+}
 
 function partName(headers: string): string | null {
   const disposition = headers.split("\r\n").find((line) => /^content-disposition:/i.test(line.trim()));

@@ -5,6 +5,11 @@ import { memberships, users, type Role } from "@/db/schema";
 import { createProject } from "@/db/queries/projects";
 import { createInvitation } from "@/db/queries/invitations";
 import { signUpUser } from "@/db/queries/users";
+import { createPlanSet } from "@/db/queries/plan-sets";
+import { createUnitType } from "@/db/queries/unit-types";
+import { createOpeningType } from "@/db/queries/opening-types";
+import { createTag } from "@/db/queries/tags";
+import { listSheets } from "@/db/queries/sheets";
 import { hashPassword } from "@/lib/auth/password";
 
 export const PASSWORD = "correct horse battery";
@@ -54,7 +59,9 @@ export async function makeOrg(label = "Cedarline") {
     email: `invitee-${unique()}@example.test`,
     role: "estimator",
   });
+  const plans = await makePlans({ orgId: organisation.id, projectId: project.id, userId: user.id });
   return {
+    plans,
     org: organisation,
     people: { admin, estimator, project_manager: projectManager } satisfies Record<Role, Person>,
     spare,
@@ -65,3 +72,21 @@ export async function makeOrg(label = "Cedarline") {
 }
 
 export type World = Awaited<ReturnType<typeof makeOrg>>;
+
+/**
+ * A plan set of two ARCH D pages (2592 × 1728 pt), a unit type on the first, two opening types and a
+ * tag. The file key is a placeholder: these rows exercise the API, not the upload path.
+ */
+export async function makePlans(s: { orgId: string; projectId: string; userId: string }) {
+  const page = { width: 2592, height: 1728, rotation: 0, userUnit: 1 };
+  const planSetId = await createPlanSet(s, { name: "A-set.pdf", key: `fixture-${unique()}`, size: 1234 }, [
+    { pageNumber: 1, label: "A-201", ...page },
+    { pageNumber: 2, label: null, ...page },
+  ]);
+  const [sheet, commonSheet] = await listSheets(s);
+  const unitType = await createUnitType(s, { name: `Type A ${unique()}`, count: 12 });
+  const w1 = await createOpeningType(s, { mark: "W1", width: 36, height: 60, setback: 0.5 });
+  const w2 = await createOpeningType(s, { mark: "W2", width: 30, height: 48, setback: 0 });
+  const tag = await createTag(s, { sheetId: sheet!.id, openingTypeId: w1.id, x: 400, y: 300 });
+  return { planSetId, sheet: sheet!, commonSheet: commonSheet!, unitType, w1, w2, tag };
+}

@@ -2,6 +2,7 @@ import { defineConfig } from "@playwright/test";
 
 const appPort = Number(process.env.APP_PORT ?? 31000);
 const smtpPort = Number(process.env.SMTP_PORT ?? 32000);
+const uploadPort = Number(process.env.UPLOAD_STAND_IN_PORT ?? 33000);
 
 // Debian's Chromium, never a downloaded browser. The flags keep it off the (closed) network.
 const chromiumArgs = [
@@ -30,6 +31,7 @@ export default defineConfig({
   },
   webServer: [
     { command: "npx tsx scripts/smtp-stand-in.ts", port: smtpPort, reuseExistingServer: false, timeout: 30_000 },
+    { command: "npx tsx scripts/upload-stand-in.ts", port: uploadPort, reuseExistingServer: false, timeout: 30_000 },
     {
       command: `npx next start -H 127.0.0.1 -p ${appPort}`,
       url: `http://127.0.0.1:${appPort}/sign-in`,

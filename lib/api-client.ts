@@ -4,6 +4,8 @@ export class ApiError extends Error {
     readonly status: number,
     message: string,
     readonly fields: Record<string, string> = {},
+    /** The whole refusal, e.g. `current` on a 409 stale edit (see StaleEdit in lib/plans/api-types.ts). */
+    readonly body: Record<string, unknown> = {},
   ) {
     super(message);
   }
@@ -17,6 +19,6 @@ export async function api<T>(path: string, init: { method?: string; body?: unkno
   });
   if (res.status === 204) return undefined as T;
   const data = await res.json().catch(() => ({}));
-  if (!res.ok) throw new ApiError(res.status, data.error ?? `Request failed (${res.status}).`, data.fields);
+  if (!res.ok) throw new ApiError(res.status, data.error ?? `Request failed (${res.status}).`, data.fields, data);
   return data as T;
 }

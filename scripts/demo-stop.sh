@@ -3,5 +3,6 @@
 source "$(dirname "$0")/lib.sh"
 stop_service app
 stop_service smtp
+stop_service uploads
 pg_down
 say "stopped"

@@ -5,6 +5,7 @@ source "$(dirname "$0")/lib.sh"
 
 APP_PORT="${PORT:-3000}"
 SMTP_PORT="${SMTP_PORT:-2525}"
+UPLOAD_STAND_IN_PORT="${UPLOAD_STAND_IN_PORT:-3900}"
 ensure_node_modules
 pg_up
 ensure_database miterwise
@@ -14,10 +15,14 @@ export DATABASE_URL="$(db_url miterwise)"
 export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
 export NEXTAUTH_SECRET="$(cat "$DATA/auth-secret")"
 export SMTP_PORT OUTBOX_DIR="$DATA/outbox" MITERWISE_DATA_DIR="$DATA"
+export UPLOAD_STAND_IN_PORT UPLOAD_STAND_IN_DIR="$DATA/uploads"
 
 stop_service app
 stop_service smtp
+stop_service uploads
 cd "$ROOT"
+start_service uploads npx tsx scripts/upload-stand-in.ts # the seed stores the demo plan set through it
+wait_for_port "$UPLOAD_STAND_IN_PORT" 30 || { tail -n 20 "$DATA/logs/uploads.log"; die "the upload stand-in did not start"; }
 say "migrating"; npx tsx scripts/migrate.ts >/dev/null
 say "seeding the demo organisations"; npx tsx scripts/seed-demo.ts
 

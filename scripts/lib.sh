@@ -121,3 +121,8 @@ wait_for_http() { # url, seconds
   for _ in $(seq 1 $(( $2 * 4 ))); do curl -fsS -o /dev/null "$1" 2>/dev/null && return 0; sleep 0.25; done
   return 1
 }
+
+wait_for_port() { # port, seconds
+  for _ in $(seq 1 $(( $2 * 4 ))); do (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null && return 0; sleep 0.25; done
+  return 1
+}

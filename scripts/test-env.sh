@@ -8,9 +8,9 @@ ensure_database "$TEST_DB"
 
 OFF="$(checkout_offset)"
 export DATABASE_URL="$(db_url "$TEST_DB")"
-export APP_PORT="$((31000 + OFF))" SMTP_PORT="$((32000 + OFF))"
+export APP_PORT="$((31000 + OFF))" SMTP_PORT="$((32000 + OFF))" UPLOAD_STAND_IN_PORT="$((33000 + OFF))"
 export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
 export NEXTAUTH_SECRET="miterwise-test-secret-not-for-production"
-export MITERWISE_DATA_DIR="$DATA/test" OUTBOX_DIR="$DATA/test/outbox" BCRYPT_ROUNDS=4
+export MITERWISE_DATA_DIR="$DATA/test" OUTBOX_DIR="$DATA/test/outbox" UPLOAD_STAND_IN_DIR="$DATA/test/uploads" BCRYPT_ROUNDS=4
 export NEXT_DIST_DIR=".next-test" # the demo's build in .next stays untouched
 mkdir -p "$MITERWISE_DATA_DIR/results"

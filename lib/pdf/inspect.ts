@@ -140,7 +140,7 @@ export async function inspectPdf(bytes: Uint8Array, limits: PdfLimits = {}): Pro
       page.cleanup();
       // pdf.js runs on this thread: yield so other requests (and the deadline timer) get a turn.
       await new Promise((resolve) => setImmediate(resolve));
-      if (Date.now() > deadline) throw rejections.tooSlow(Math.round(timeoutMs / 1000));
+      if (Date.now() >= deadline) throw rejections.tooSlow(Math.round(timeoutMs / 1000));
     }
     return { pageCount, pages };
   } finally {

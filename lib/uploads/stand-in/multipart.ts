@@ -21,7 +21,7 @@ export class FilePartExtractor extends Transform {
   private readonly dashBoundary: Buffer;
   private readonly delimiter: Buffer;
   private state: "preamble" | "headers" | "file" | "skip" | "done" = "preamble";
-  private pending = Buffer.alloc(0);
+  private pending: Buffer = Buffer.alloc(0);
   private seen = 0;
 
   /** `maxBytes` bounds the whole body, so junk parts beside the file cannot stream in forever. */

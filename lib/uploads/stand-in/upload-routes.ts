@@ -74,7 +74,11 @@ async function receive(ctx: StandIn, req: IncomingMessage, res: ServerResponse, 
   const abandon = (status: number, body: Record<string, unknown>, headers: Record<string, string> = {}) => {
     req.unpipe(extractor);
     extractor.destroy();
-    sendJson(res, status, body, { ...headers, Connection: "close" });
+    // A client still sending may miss an answer if the socket closes under it; a declared length was already
+    // checked against the limits, so read the rest away. An undeclared one could go on forever: hang up.
+    const bounded = req.headers["content-length"] !== undefined;
+    if (bounded) req.resume();
+    sendJson(res, status, body, bounded ? headers : { ...headers, Connection: "close" });
     return null;
   };
   const done = await ctx.store.get(upload.key);

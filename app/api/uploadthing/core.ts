@@ -1,0 +1,43 @@
+import { createUploadthing, type FileRouter } from "uploadthing/next";
+import { UploadThingError } from "uploadthing/server";
+import { z } from "zod";
+import { getOrgContext } from "@/db/queries/memberships";
+import { assertProject } from "@/db/queries/project-scope";
+import { userIdFromRequest } from "@/lib/auth/session";
+import { toAppError } from "@/lib/errors";
+import { can } from "@/lib/permissions";
+import { DEFAULT_PDF_LIMITS } from "@/lib/pdf/inspect";
+import { ingestPlanUpload } from "@/lib/plans/ingest-upload";
+import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
+
+useLocalUploadStandInUnlessConfigured();
+const f = createUploadthing();
+
+/** Same wording for "no such org" and "not yours": the upload route must not reveal what exists. */
+const refuse = (code: "FORBIDDEN" | "NOT_FOUND", message: string) => new UploadThingError({ code, message });
+
+export const planRouter = {
+  /** Plan-set PDFs for one project. The SDK limit is a power of two; our own 200 MB limit is checked first. */
+  planSet: f({ pdf: { maxFileSize: "256MB", maxFileCount: 20 } })
+    .input(z.object({ orgSlug: z.string().max(80), projectId: z.uuid() }))
+    .middleware(async ({ req, input, files }) => {
+      const userId = await userIdFromRequest(req);
+      if (!userId) throw refuse("FORBIDDEN", "Sign in to upload plans.");
+      const org = await getOrgContext(userId, input.orgSlug);
+      if (!org) throw refuse("NOT_FOUND", "No such project.");
+      if (!can(org.role, "plans.write")) throw refuse("FORBIDDEN", "Your role cannot upload plans.");
+      try {
+        await assertProject({ orgId: org.orgId, projectId: input.projectId });
+      } catch (error) {
+        throw refuse("NOT_FOUND", toAppError(error)?.message ?? "No such project.");
+      }
+      const tooBig = files.find((file) => file.size > DEFAULT_PDF_LIMITS.maxBytes);
+      if (tooBig) throw refuse("FORBIDDEN", `${tooBig.name} is larger than the 200 MB limit. Split the set and upload each part.`);
+      return { orgId: org.orgId, projectId: input.projectId, userId };
+    })
+    .onUploadComplete(async ({ metadata, file }) =>
+      ingestPlanUpload(metadata, { key: file.key, name: file.name, size: file.size }),
+    ),
+} satisfies FileRouter;
+
+export type PlanRouter = typeof planRouter;

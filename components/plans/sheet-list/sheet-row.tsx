@@ -1,0 +1,106 @@
+"use client";
+
+import Link from "next/link";
+import { useState } from "react";
+import type { SheetView, UnitTypeView } from "@/lib/plans/api-types";
+import { CalibrationStatus } from "./calibration-status";
+import { SheetLabelEditor } from "./sheet-label-editor";
+import { SheetThumbnail } from "./sheet-thumbnail";
+import type { SheetNotice, SheetPatch } from "./use-plans-data";
+
+export interface SheetRowProps {
+  sheet: SheetView;
+  href: string;
+  unitTypes: UnitTypeView[];
+  canWrite: boolean;
+  notice: SheetNotice | undefined;
+  onSave: (sheet: SheetView, patch: SheetPatch) => Promise<Record<string, string> | null>;
+}
+
+/** One sheet: its picture, label, unit type, calibration and tags, and the way into the viewer. */
+export function SheetRow({ sheet, href, unitTypes, canWrite, notice, onSave }: SheetRowProps) {
+  const [editingLabel, setEditingLabel] = useState(false);
+  const [unitError, setUnitError] = useState<string | null>(null);
+  const unitName = (id: string | null) => (id ? (unitTypes.find((u) => u.id === id)?.name ?? "Unknown unit type") : "Common area (counts once)");
+
+  async function changeUnitType(value: string) {
+    setUnitError(null);
+    const fields = await onSave(sheet, { unitTypeId: value || null });
+    if (fields) setUnitError(Object.values(fields).join(" "));
+  }
+
+  return (
+    <li className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-2 border-b border-maple-100 py-3 last:border-0 sm:grid-cols-[auto_minmax(9rem,1.2fr)_minmax(10rem,1fr)_minmax(10rem,1fr)_auto]">
+      <Link href={href} tabIndex={-1} aria-hidden className="row-span-4 self-start sm:row-span-1">
+        <SheetThumbnail sheet={sheet} />
+      </Link>
+      <div className="min-w-0">
+        {editingLabel ? (
+          <SheetLabelEditor
+            sheetId={sheet.id}
+            label={sheet.label}
+            version={sheet.version}
+            onSave={(label) => onSave(sheet, { label })}
+            onClose={() => setEditingLabel(false)}
+          />
+        ) : (
+          <p className="flex flex-wrap items-baseline gap-x-2">
+            <Link href={href} className="font-semibold text-graphite-900 underline decoration-maple-300 underline-offset-2 hover:decoration-spruce-700">
+              {sheet.label}
+            </Link>
+            {canWrite && (
+              <button type="button" className="text-xs font-medium text-spruce-700 underline" onClick={() => setEditingLabel(true)} aria-label={`Rename ${sheet.label}`}>
+                Rename
+              </button>
+            )}
+          </p>
+        )}
+        <p className="text-xs text-graphite-600">
+          Page <span className="num">{sheet.pageNumber}</span> · <span className="num">{sheet.tagCount}</span> tag{sheet.tagCount === 1 ? "" : "s"}
+        </p>
+      </div>
+      <div className="min-w-0 text-sm">
+        {canWrite ? (
+          <>
+            <label htmlFor={`unit-${sheet.id}`} className="sr-only">
+              Unit type of {sheet.label}
+            </label>
+            <select
+              id={`unit-${sheet.id}`}
+              className="w-full rounded border border-graphite-400 bg-white px-2 py-1 text-sm"
+              value={sheet.unitTypeId ?? ""}
+              onChange={(e) => void changeUnitType(e.target.value)}
+              aria-invalid={unitError ? true : undefined}
+            >
+              <option value="">Common area (counts once)</option>
+              {unitTypes.map((u) => (
+                <option key={u.id} value={u.id}>
+                  {u.name} (× {u.count})
+                </option>
+              ))}
+            </select>
+            {unitError && (
+              <p role="alert" className="mt-1 text-xs font-medium text-alarm-700">
+                ⚠ {unitError}
+              </p>
+            )}
+          </>
+        ) : (
+          <span className={sheet.unitTypeId ? "" : "text-graphite-600"}>{unitName(sheet.unitTypeId)}</span>
+        )}
+      </div>
+      <CalibrationStatus sheet={sheet} />
+      <Link href={href} className="self-start whitespace-nowrap rounded-md border border-graphite-400 bg-white px-2.5 py-1 text-xs font-semibold text-graphite-900 hover:bg-maple-100">
+        Open sheet →
+      </Link>
+      {notice && (
+        <div role="alert" className="col-span-full rounded-md border border-alarm-600 bg-alarm-50 px-3 py-2 text-xs text-alarm-700 sm:col-start-2">
+          ⚠ {notice.text}
+          {notice.current
+            ? ` Now: label “${notice.current.label}”, ${notice.current.unitTypeId ? `unit type “${unitName(notice.current.unitTypeId)}”` : "no unit type (common area)"}.`
+            : " The sheet is no longer in this project."}
+        </div>
+      )}
+    </li>
+  );
+}

@@ -1,0 +1,54 @@
+"use client";
+
+import { memo } from "react";
+import type { Tint } from "@/lib/plans/viewer/palette";
+
+interface Props {
+  id: string;
+  mark: string;
+  tint: Tint;
+  x: number;
+  y: number;
+  selected: boolean;
+  pending: boolean;
+  widthMismatch: boolean;
+  interactive: boolean;
+  onSelect: (id: string) => void;
+}
+
+/**
+ * Our tag marker: a small rounded chip, centred on the tagged spot, showing the type's mark in the type's tint,
+ * with a white keyline so it reads over linework. Selected: a graphite ring outside the keyline and a lift.
+ * A measured width that disagrees with the type gets a notched "≠" badge at the corner, so the flag does not
+ * rely on colour. Screen-sized at every zoom.
+ */
+export const TagChip = memo(function TagChip({ id, mark, tint, x, y, selected, pending, widthMismatch, interactive, onSelect }: Props) {
+  return (
+    <button
+      type="button"
+      data-tag-id={interactive && !pending ? id : undefined}
+      tabIndex={interactive && !pending ? 0 : -1}
+      aria-pressed={selected}
+      aria-label={`Tag ${mark}${widthMismatch ? ", measured width differs from the type" : ""}${pending ? ", saving" : ""}`}
+      onClick={(e) => {
+        // Pointer clicks are handled by the viewer's gestures; this is for Enter/Space on a focused chip.
+        if (e.detail === 0) onSelect(id);
+      }}
+      className={`absolute flex h-5 min-w-7 -translate-x-1/2 -translate-y-1/2 items-center justify-center rounded-[5px] border px-1.5 text-[11px] leading-none font-bold tracking-tight whitespace-nowrap shadow-[0_0_0_1.5px_white] select-none ${
+        selected ? "z-10 scale-125 border-graphite-900 outline-2 outline-offset-[3px] outline-graphite-900" : "border-graphite-900/60"
+      } ${pending ? "border-dashed opacity-70" : ""} ${interactive && !pending ? "pointer-events-auto cursor-grab touch-none" : "pointer-events-none"}`}
+      style={{ left: x, top: y, backgroundColor: tint.fill, color: tint.text }}
+    >
+      {mark}
+      {widthMismatch && (
+        <span
+          aria-hidden
+          className="absolute -top-2.5 -right-2.5 flex h-4 w-4 items-center justify-center rounded-sm border border-graphite-900 bg-white text-[10px] font-bold text-graphite-900 shadow-[0_0_0_1px_white]"
+          style={{ clipPath: "polygon(0 0, 100% 0, 100% 100%, 30% 100%, 0 70%)" }}
+        >
+          ≠
+        </span>
+      )}
+    </button>
+  );
+});

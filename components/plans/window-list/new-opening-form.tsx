@@ -1,0 +1,102 @@
+"use client";
+
+import { useMutation } from "@tanstack/react-query";
+import { useState, type FormEvent } from "react";
+import { Button } from "@/components/ui/button";
+import { Card, Notice } from "@/components/ui/card";
+import { Field, TextInput } from "@/components/ui/field";
+import type { OpeningTypeView } from "@/lib/plans/api-types";
+import { tape } from "@/lib/plans/window-list/length-text";
+import { EMPTY_DRAFT, planCreate, type OpeningDraft } from "@/lib/plans/window-list/new-opening";
+import { PlansApiError, plansApi, projectApi } from "@/lib/plans/window-list/request";
+import { TrimSpecFields } from "./trim-spec-fields";
+import { WallBuildUpFields } from "./wall-build-up-fields";
+
+/** Adds a line to the window list. Lengths are typed as people write them and checked before sending. */
+export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: string; projectId: string; onAdded: (row: OpeningTypeView) => void }) {
+  const [draft, setDraft] = useState<OpeningDraft>(EMPTY_DRAFT);
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [added, setAdded] = useState<OpeningTypeView | null>(null);
+  const set = <K extends keyof OpeningDraft>(key: K, value: OpeningDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
+
+  const create = useMutation({
+    mutationFn: (body: unknown) => plansApi<{ openingType: OpeningTypeView }>(`${projectApi(orgSlug, projectId)}/opening-types`, { method: "POST", body }),
+    onSuccess: ({ openingType }) => {
+      onAdded(openingType);
+      setAdded(openingType);
+      // The next line of a window list usually shares the wall and trim: keep those, clear the rest.
+      setDraft((d) => ({ ...d, mark: "", width: "", height: "", notes: "" }));
+      setErrors({});
+    },
+    onError: (error) => setErrors(error instanceof PlansApiError ? error.fields : {}),
+  });
+
+  function submit(e: FormEvent) {
+    e.preventDefault();
+    setAdded(null);
+    const plan = planCreate(draft);
+    if (plan.kind === "invalid") {
+      setErrors(plan.fields);
+      create.reset();
+      return;
+    }
+    setErrors({});
+    create.mutate(plan.body);
+  }
+
+  const count = Object.keys(errors).length;
+  return (
+    <Card title="Add an opening type">
+      <form onSubmit={submit} className="space-y-4" noValidate>
+        {create.isError && <Notice tone="error">{create.error.message}</Notice>}
+        {!create.isError && count > 0 && <Notice tone="error">{count === 1 ? "One field needs attention." : `${count} fields need attention.`}</Notice>}
+        {added && <Notice>Added {added.mark}: {tape(added.width)} × {tape(added.height)}, setback {tape(added.setback)}.</Notice>}
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+          <Field label="Mark" name="new-mark" error={errors.mark}>
+            <TextInput name="new-mark" placeholder="W1" maxLength={12} value={draft.mark} onChange={(e) => set("mark", e.target.value)} error={errors.mark} />
+          </Field>
+          <Field label="Width" name="new-width" error={errors.width} hint="Jamb to jamb">
+            <TextInput name="new-width" placeholder={`35 1/2 or 2'-11 1/2"`} value={draft.width} onChange={(e) => set("width", e.target.value)} error={errors.width} />
+          </Field>
+          <Field label="Height" name="new-height" error={errors.height}>
+            <TextInput name="new-height" placeholder={`59 1/2 or 4'-11 1/2"`} value={draft.height} onChange={(e) => set("height", e.target.value)} error={errors.height} />
+          </Field>
+          {draft.setbackFrom === "typed" && (
+            <Field label="Setback" name="new-setback" error={errors.setback} hint="Wall face to jamb edge">
+              <TextInput name="new-setback" placeholder="4 9/16" value={draft.setback} onChange={(e) => set("setback", e.target.value)} error={errors.setback} />
+            </Field>
+          )}
+        </div>
+        <fieldset className="space-y-2">
+          <legend className="text-sm font-semibold text-graphite-900">Setback</legend>
+          <div className="flex flex-wrap gap-4 text-sm">
+            {(
+              [
+                ["typed", "Type it"],
+                ["wall", "Work it out from the wall build-up"],
+              ] as const
+            ).map(([value, label]) => (
+              <label key={value} className="flex items-center gap-2">
+                <input type="radio" name="setbackFrom" value={value} checked={draft.setbackFrom === value} onChange={() => set("setbackFrom", value)} />
+                {label}
+              </label>
+            ))}
+          </div>
+          {draft.setbackFrom === "wall" && <WallBuildUpFields wall={draft.wall} onChange={(wall) => set("wall", wall)} errors={errors} />}
+        </fieldset>
+        <TrimSpecFields draft={draft} set={set} errors={errors} />
+        <Field label="Notes" name="new-notes" error={errors.notes}>
+          <TextInput name="new-notes" maxLength={500} value={draft.notes} onChange={(e) => set("notes", e.target.value)} error={errors.notes} />
+        </Field>
+        <div className="flex flex-wrap gap-3">
+          <Button type="submit" disabled={create.isPending}>
+            {create.isPending ? "Adding…" : "Add to window list"}
+          </Button>
+          <Button type="button" look="secondary" onClick={() => (setDraft(EMPTY_DRAFT), setErrors({}), setAdded(null), create.reset())}>
+            Clear
+          </Button>
+        </div>
+      </form>
+    </Card>
+  );
+}

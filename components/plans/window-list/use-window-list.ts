@@ -1,0 +1,98 @@
+"use client";
+
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useState } from "react";
+import type { CountsView, OpeningTypeView } from "@/lib/plans/api-types";
+import { planCellPatch, type CellEdit } from "@/lib/plans/window-list/cell-patch";
+import type { EditableColumn } from "@/lib/plans/window-list/columns";
+import { PlansApiError, plansApi, projectApi } from "@/lib/plans/window-list/request";
+import type { RowNotice, WindowListControls } from "./window-list-context";
+
+type TypesData = { openingTypes: OpeningTypeView[] };
+type Patch = { row: OpeningTypeView; body: unknown };
+
+/** The window list's data and every edit of it: cell patches, deletes, stale-edit recovery. */
+export function useWindowList(orgSlug: string, projectId: string, canWrite: boolean) {
+  const base = projectApi(orgSlug, projectId);
+  const queryClient = useQueryClient();
+  const typesKey = ["opening-types", orgSlug, projectId];
+  const types = useQuery({ queryKey: typesKey, queryFn: () => plansApi<TypesData>(`${base}/opening-types`) });
+  const counts = useQuery({ queryKey: ["counts", orgSlug, projectId], queryFn: () => plansApi<{ counts: CountsView }>(`${base}/counts`) });
+
+  const [editing, setEditing] = useState<WindowListControls["editing"]>(null);
+  const [notices, setNotices] = useState<Record<string, RowNotice>>({});
+  const notify = (id: string, notice: RowNotice | null) =>
+    setNotices(({ [id]: _, ...rest }) => (notice ? { ...rest, [id]: notice } : rest));
+
+  const putRow = (row: OpeningTypeView) =>
+    queryClient.setQueryData<TypesData>(typesKey, (old) =>
+      old ? { openingTypes: old.openingTypes.map((r) => (r.id === row.id ? row : r)) } : old,
+    );
+  const dropRow = (id: string) =>
+    queryClient.setQueryData<TypesData>(typesKey, (old) => (old ? { openingTypes: old.openingTypes.filter((r) => r.id !== id) } : old));
+
+  /** A 409 with `current`: someone saved first. Show their row and say so; a null `current` means it is gone. */
+  const staleRow = (row: OpeningTypeView, error: PlansApiError<OpeningTypeView>) => {
+    if (error.current) {
+      putRow(error.current);
+      notify(row.id, { tone: "error", text: error.message });
+    } else {
+      dropRow(row.id);
+      void queryClient.invalidateQueries({ queryKey: typesKey });
+    }
+  };
+
+  const patch = useMutation({
+    mutationFn: ({ row, body }: Patch) =>
+      plansApi<{ openingType: OpeningTypeView }>(`${base}/opening-types/${row.id}`, { method: "PATCH", body }),
+  });
+  const del = useMutation({
+    mutationFn: (row: OpeningTypeView) => plansApi<void>(`${base}/opening-types/${row.id}?version=${row.version}`, { method: "DELETE" }),
+    onSuccess: (_, row) => {
+      dropRow(row.id);
+      notify(row.id, null);
+      void queryClient.invalidateQueries({ queryKey: ["counts", orgSlug, projectId] });
+    },
+    onError: (error, row) => {
+      if (error instanceof PlansApiError && error.status === 409 && error.current !== undefined) staleRow(row, error as PlansApiError<OpeningTypeView>);
+      else notify(row.id, { tone: "error", text: error.message });
+    },
+  });
+
+  async function commit(row: OpeningTypeView, edit: CellEdit): Promise<Record<string, string> | null> {
+    const plan = planCellPatch(row, edit);
+    if (plan.kind === "unchanged") return null;
+    if (plan.kind === "invalid") return plan.fields;
+    try {
+      const { openingType } = await patch.mutateAsync({ row, body: plan.body });
+      putRow(openingType);
+      notify(row.id, null);
+      return null;
+    } catch (error) {
+      if (!(error instanceof PlansApiError)) return { _: "Could not reach the server; your change is not saved." };
+      if (error.status === 409 && error.current !== undefined) {
+        staleRow(row, error as PlansApiError<OpeningTypeView>);
+        return null;
+      }
+      // 422, or a 409 naming a field (a mark already used): show it beside the cell.
+      return Object.keys(error.fields).length > 0 ? error.fields : { _: error.message };
+    }
+  }
+
+  const controls: WindowListControls = {
+    canWrite,
+    editing,
+    startEdit: (rowId: string, column: EditableColumn) => setEditing({ rowId, column }),
+    stopEdit: (rowId: string, column: EditableColumn) =>
+      setEditing((cur) => (cur && cur.rowId === rowId && cur.column === column ? null : cur)),
+    commit,
+    remove: (row) => del.mutate(row),
+    removing: del.isPending ? (del.variables?.id ?? null) : null,
+    notices,
+  };
+
+  const added = (row: OpeningTypeView) =>
+    queryClient.setQueryData<TypesData>(typesKey, (old) => (old ? { openingTypes: [...old.openingTypes, row] } : { openingTypes: [row] }));
+
+  return { types, counts, controls, added };
+}

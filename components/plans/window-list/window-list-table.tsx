@@ -1,0 +1,94 @@
+"use client";
+
+import { useTable, type SortingState } from "@tanstack/react-table";
+import { Fragment, useState } from "react";
+import { columns, features, type WindowListRow } from "./table-columns";
+import { useWindowListControls } from "./window-list-context";
+
+const SORT_MARK = { asc: "▲", desc: "▼" } as const;
+const SORT_WORD = { asc: "ascending", desc: "descending" } as const;
+
+/** The window list as a dense, sortable table; rows must be stable (memoised) between renders. */
+export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
+  const { canWrite, notices } = useWindowListControls();
+  const [sorting, setSorting] = useState<SortingState>([{ id: "mark", desc: false }]);
+  const table = useTable({
+    features,
+    columns,
+    data: rows,
+    getRowId: (r) => r.id,
+    state: { sorting },
+    onSortingChange: setSorting,
+  });
+  const visible = table.getAllLeafColumns().filter((c) => canWrite || c.id !== "actions");
+
+  return (
+    <div className="overflow-x-auto rounded-lg border border-maple-200 bg-white">
+      <table className="w-full border-collapse text-sm">
+        <caption className="sr-only">Window list: opening types of this project. Column headers sort the list.</caption>
+        <thead className="bg-maple-100 text-graphite-700">
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id}>
+              {group.headers
+                .filter((h) => visible.includes(h.column))
+                .map((header) => {
+                  const sorted = header.column.getIsSorted();
+                  const end = header.column.columnDef.meta?.align === "end";
+                  return (
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={sorted ? SORT_WORD[sorted] : undefined}
+                      className={`whitespace-nowrap border-b border-maple-200 px-2 py-2 font-semibold ${end ? "text-right" : "text-left"}`}
+                    >
+                      {header.column.getCanSort() ? (
+                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-graphite-900">
+                          <table.FlexRender header={header} />
+                          <span aria-hidden className={`text-[0.65rem] ${sorted ? "text-brass-700" : "text-graphite-400"}`}>
+                            {sorted ? SORT_MARK[sorted] : "↕"}
+                          </span>
+                        </button>
+                      ) : (
+                        <table.FlexRender header={header} />
+                      )}
+                    </th>
+                  );
+                })}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => {
+            const notice = notices[row.id];
+            return (
+              <Fragment key={row.id}>
+                <tr className="border-b border-maple-100 align-top last:border-0 hover:bg-maple-50">
+                  {row
+                    .getAllCells()
+                    .filter((c) => visible.includes(c.column))
+                    .map((c) => {
+                      const meta = c.column.columnDef.meta;
+                      const kind = meta?.align === "end" ? "num whitespace-nowrap" : meta?.column === "notes" ? "" : "whitespace-nowrap";
+                      return (
+                        <td key={c.id} className={`px-2 py-1 ${kind} ${meta?.width ?? ""} ${meta?.column === "mark" ? "font-semibold" : ""}`}>
+                          <table.FlexRender cell={c} />
+                        </td>
+                      );
+                    })}
+                </tr>
+                {notice && (
+                  <tr>
+                    <td colSpan={visible.length} className={`px-2 pb-2 text-xs font-medium ${notice.tone === "error" ? "text-alarm-700" : "text-graphite-700"}`} role="alert">
+                      {notice.tone === "error" ? "⚠ " : ""}
+                      {row.original.mark}: {notice.text}
+                    </td>
+                  </tr>
+                )}
+              </Fragment>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}

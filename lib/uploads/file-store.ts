@@ -1,0 +1,19 @@
+import { UTApi } from "uploadthing/server";
+import { useLocalUploadStandInUnlessConfigured } from "./config";
+
+let api: UTApi | undefined;
+function utapi() {
+  useLocalUploadStandInUnlessConfigured();
+  api ??= new UTApi();
+  return api;
+}
+
+/** The stored bytes of a file, fetched through a short-lived signed URL (the browser never sees it). */
+export async function fetchStoredFile(key: string): Promise<Response> {
+  const { ufsUrl } = await utapi().generateSignedURL(key, { expiresIn: 60 });
+  return fetch(ufsUrl);
+}
+
+export async function deleteStoredFiles(keys: string[]) {
+  if (keys.length > 0) await utapi().deleteFiles(keys);
+}

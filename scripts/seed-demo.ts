@@ -4,6 +4,7 @@ import { db, pool } from "@/db/client";
 import { memberships, organisations, projects, users } from "@/db/schema";
 import { getUserByEmail, uniqueOrgSlug } from "@/db/queries/users";
 import { hashPassword } from "@/lib/auth/password";
+import { seedDemoPlans } from "@/db/seed/demo-plans";
 import { DEMO_PASSWORD, demoOrgs, demoPeople, roleOfLogin } from "@/db/seed/demo-data";
 
 if (process.argv.includes("--list")) {
@@ -41,5 +42,8 @@ for (const o of demoOrgs) {
   });
   created++;
 }
-console.log(created ? `seeded ${created} organisation(s)` : "demo data already present");
+const birchmoor = demoOrgs[0]!;
+const [org] = await db.select({ id: organisations.id }).from(organisations).where(eq(organisations.name, birchmoor.name));
+const plans = await seedDemoPlans(org!.id, birchmoor.projects[0]!.name, ids.get(birchmoor.owner)!);
+console.log(created || plans ? `seeded ${created} organisation(s)${plans ? " and the demo plan set" : ""}` : "demo data already present");
 await pool.end();

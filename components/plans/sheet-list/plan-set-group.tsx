@@ -20,11 +20,12 @@ export interface PlanSetGroupProps {
   unitTypes: UnitTypeView[];
   canWrite: boolean;
   notices: Record<string, SheetNotice>;
+  onDismiss: (sheetId: string) => void;
   onSave: (sheet: SheetView, patch: SheetPatch) => Promise<Record<string, string> | null>;
 }
 
 /** One uploaded PDF and its sheets; the PDF is loaded once here for all of their thumbnails. */
-export function PlanSetGroup({ orgSlug, projectId, planSetId, name, sheets, unitTypes, canWrite, notices, onSave }: PlanSetGroupProps) {
+export function PlanSetGroup({ orgSlug, projectId, planSetId, name, sheets, unitTypes, canWrite, notices, onDismiss, onSave }: PlanSetGroupProps) {
   const [pdf, setPdf] = useState<PlanSetPdf>({ pdf: null, state: "loading" });
   const calibrated = sheets.filter((s) => s.inchesPerUnit !== null).length;
   const tags = sheets.reduce((n, s) => n + s.tagCount, 0);
@@ -58,6 +59,7 @@ export function PlanSetGroup({ orgSlug, projectId, planSetId, name, sheets, unit
               unitTypes={unitTypes}
               canWrite={canWrite}
               notice={notices[sheet.id]}
+              onDismiss={onDismiss}
               onSave={onSave}
             />
           ))}

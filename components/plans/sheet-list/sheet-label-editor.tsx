@@ -38,31 +38,31 @@ export function SheetLabelEditor({
 
   return (
     <form onSubmit={submit} onKeyDown={(e) => e.key === "Escape" && onClose()} className="space-y-1" noValidate>
-      <div className="flex gap-1">
-        <input
-          id={id}
-          aria-label="Sheet label"
-          aria-invalid={error ? true : undefined}
-          aria-describedby={error ? `${id}-error` : undefined}
-          className={input}
-          value={text}
-          maxLength={40}
-          autoFocus
-          onChange={(e) => setText(e.target.value)}
-          readOnly={saving}
-        />
-        <button type="submit" className="rounded bg-spruce-700 px-2 text-xs font-semibold text-maple-50 hover:bg-spruce-800" disabled={saving}>
-          {saving ? "…" : "Save"}
-        </button>
-        <button type="button" className="rounded px-2 text-xs font-semibold text-spruce-700 hover:bg-maple-100" onClick={onClose}>
-          Cancel
-        </button>
-      </div>
+      <input
+        id={id}
+        aria-label="Sheet label"
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : undefined}
+        className={input}
+        value={text}
+        maxLength={40}
+        autoFocus
+        onChange={(e) => setText(e.target.value)}
+        readOnly={saving}
+      />
       {error && (
         <p id={`${id}-error`} role="alert" className="text-xs font-medium text-alarm-700">
           ⚠ {error}
         </p>
       )}
+      <div className="flex gap-1">
+        <button type="submit" className="rounded bg-spruce-700 px-2 py-0.5 text-xs font-semibold text-maple-50 hover:bg-spruce-800" disabled={saving}>
+          {saving ? "Saving…" : "Save"}
+        </button>
+        <button type="button" className="rounded px-2 py-0.5 text-xs font-semibold text-spruce-700 hover:bg-maple-100" onClick={onClose}>
+          Cancel
+        </button>
+      </div>
     </form>
   );
 }

@@ -22,6 +22,7 @@ export function SheetList(props: {
   unitTypes: UnitTypeView[];
   canWrite: boolean;
   notices: Record<string, SheetNotice>;
+  onDismiss: (sheetId: string) => void;
   onSave: (sheet: SheetView, patch: SheetPatch) => Promise<Record<string, string> | null>;
 }) {
   const { sheets, ...rest } = props;

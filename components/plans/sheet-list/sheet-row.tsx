@@ -14,11 +14,12 @@ export interface SheetRowProps {
   unitTypes: UnitTypeView[];
   canWrite: boolean;
   notice: SheetNotice | undefined;
+  onDismiss: (sheetId: string) => void;
   onSave: (sheet: SheetView, patch: SheetPatch) => Promise<Record<string, string> | null>;
 }
 
 /** One sheet: its picture, label, unit type, calibration and tags, and the way into the viewer. */
-export function SheetRow({ sheet, href, unitTypes, canWrite, notice, onSave }: SheetRowProps) {
+export function SheetRow({ sheet, href, unitTypes, canWrite, notice, onDismiss, onSave }: SheetRowProps) {
   const [editingLabel, setEditingLabel] = useState(false);
   const [unitError, setUnitError] = useState<string | null>(null);
   const unitName = (id: string | null) => (id ? (unitTypes.find((u) => u.id === id)?.name ?? "Unknown unit type") : "Common area (counts once)");
@@ -30,8 +31,8 @@ export function SheetRow({ sheet, href, unitTypes, canWrite, notice, onSave }: S
   }
 
   return (
-    <li className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-2 border-b border-maple-100 py-3 last:border-0 sm:grid-cols-[auto_minmax(9rem,1.2fr)_minmax(10rem,1fr)_minmax(10rem,1fr)_auto]">
-      <Link href={href} tabIndex={-1} aria-hidden className="row-span-4 self-start sm:row-span-1">
+    <li className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-2 border-b border-maple-100 py-3 last:border-0 sm:grid-cols-[8.25rem_minmax(7rem,1fr)_minmax(11.5rem,14rem)_minmax(9rem,11rem)_auto]">
+      <Link href={href} tabIndex={-1} aria-hidden className="row-span-4 flex w-[8.25rem] justify-center self-start sm:row-span-1">
         <SheetThumbnail sheet={sheet} />
       </Link>
       <div className="min-w-0">
@@ -72,7 +73,7 @@ export function SheetRow({ sheet, href, unitTypes, canWrite, notice, onSave }: S
               onChange={(e) => void changeUnitType(e.target.value)}
               aria-invalid={unitError ? true : undefined}
             >
-              <option value="">Common area (counts once)</option>
+              <option value="">Common area (once)</option>
               {unitTypes.map((u) => (
                 <option key={u.id} value={u.id}>
                   {u.name} (× {u.count})
@@ -98,7 +99,10 @@ export function SheetRow({ sheet, href, unitTypes, canWrite, notice, onSave }: S
           ⚠ {notice.text}
           {notice.current
             ? ` Now: label “${notice.current.label}”, ${notice.current.unitTypeId ? `unit type “${unitName(notice.current.unitTypeId)}”` : "no unit type (common area)"}.`
-            : " The sheet is no longer in this project."}
+            : " The sheet is no longer in this project."}{" "}
+          <button type="button" className="font-semibold text-graphite-700 underline" onClick={() => onDismiss(sheet.id)}>
+            Dismiss
+          </button>
         </div>
       )}
     </li>

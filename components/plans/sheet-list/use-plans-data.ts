@@ -63,5 +63,7 @@ export function usePlansData(orgSlug: string, projectId: string) {
     for (const what of ["sheets", "counts"]) void queryClient.invalidateQueries({ queryKey: key(what) });
   };
 
-  return { base, sheets, unitTypes, counts, openingTypes, notices, saveSheet, unitTypesChanged, refetch };
+  const dismiss = (sheetId: string) => setNotices(({ [sheetId]: _, ...rest }) => rest);
+
+  return { base, sheets, unitTypes, counts, openingTypes, notices, dismiss, saveSheet, unitTypesChanged, refetch };
 }

@@ -7,7 +7,7 @@
 import { useState } from "react";
 import { Document, Page } from "react-pdf";
 import type { PDFPageProxy } from "pdfjs-dist";
-import "@/components/plans/pdf-setup";
+import { planSetFileUrl } from "@/components/plans/pdf-setup";
 import type { DetailRegion } from "@/lib/plans/viewer/render-plan";
 import type { Size, View } from "@/lib/plans/viewer/view-transform";
 import { DetailTile } from "./detail-tile";
@@ -16,20 +16,22 @@ import { DetailTile } from "./detail-tile";
 // No eval of font programs from an uploaded file; fetch only the byte ranges the page needs.
 const OPTIONS = { isEvalSupported: false, disableAutoFetch: true };
 
-// react-pdf sizes its page box and canvas itself; we place and size them from our view instead.
-const FILL =
-  "[&_.react-pdf__Page]:absolute! [&_.react-pdf__Page]:inset-0 [&_canvas]:absolute! [&_canvas]:inset-0 [&_canvas]:h-full! [&_canvas]:w-full!";
+// react-pdf sizes its page box and canvas with inline styles; we place and size them from our view instead,
+// so the bitmap is CSS-stretched to the live zoom. (A plain style rule: it must beat those inline styles.)
+const FILL_CSS =
+  "[data-sheet-page] .react-pdf__Page{position:absolute!important;inset:0;min-width:0!important;min-height:0!important}" +
+  "[data-sheet-page] canvas{position:absolute;inset:0;width:100%!important;height:100%!important}";
 
 export interface PdfPageLayerProps {
-  file: string;
+  file: { orgSlug: string; projectId: string; planSetId: string };
   pageNumber: number;
   rotation: number;
-  /** Live view: where the page is drawn now. */
-  view: View;
+  /** Live view: where the page is drawn now (null until the viewer has been measured). */
+  view: View | null;
   /** Rotated page size at zoom 1. */
   pageSize: Size;
   /** CSS scale the whole-page bitmap is rendered at (settled zoom, capped). */
-  baseScale: number;
+  baseScale: number | null;
   detail: DetailRegion | null;
   dpr: number;
   page: PDFPageProxy | null;
@@ -41,12 +43,14 @@ export default function PdfPageLayer(props: PdfPageLayerProps) {
   const { file, pageNumber, rotation, view, pageSize, baseScale, detail, dpr, page, onPage, onError } = props;
   // Double buffer: the bitmap on screen stays (CSS-scaled) until the one at the new scale has finished.
   const [shown, setShown] = useState<number | null>(null);
-  const layers = shown === null || shown === baseScale ? [baseScale] : [shown, baseScale];
-  const box = { left: view.x, top: view.y, width: pageSize.width * view.zoom, height: pageSize.height * view.zoom };
+  const layers = baseScale === null ? [] : shown === null || shown === baseScale ? [baseScale] : [shown, baseScale];
+  const box = view ? { left: view.x, top: view.y, width: pageSize.width * view.zoom, height: pageSize.height * view.zoom } : { display: "none" };
 
+  // The document is mounted (and the PDF requested) at once; pages join when the viewer's size is known.
   return (
-    <Document file={file} options={OPTIONS} loading={null} error={null} onLoadError={onError} onSourceError={onError}>
-      <div className={`absolute bg-white shadow-md ring-1 ring-graphite-400/40 ${FILL}`} style={box}>
+    <Document file={planSetFileUrl(file.orgSlug, file.projectId, file.planSetId)} options={OPTIONS} loading={null} error={null} onLoadError={onError} onSourceError={onError}>
+      <style>{FILL_CSS}</style>
+      <div data-sheet-page className="absolute bg-white shadow-md ring-1 ring-graphite-400/40" style={box}>
         {layers.map((scale) => (
           <Page
             key={scale}
@@ -64,7 +68,7 @@ export default function PdfPageLayer(props: PdfPageLayerProps) {
           />
         ))}
       </div>
-      {page && <DetailTile page={page} rotation={rotation} region={detail} dpr={dpr} view={view} />}
+      {page && view && <DetailTile page={page} rotation={rotation} region={detail} dpr={dpr} view={view} />}
     </Document>
   );
 }

@@ -2,7 +2,6 @@
 
 import { useCallback, useEffect, useMemo, useState } from "react";
 import type { PDFPageProxy } from "pdfjs-dist";
-import { planSetFileUrl } from "@/components/plans/pdf-setup";
 import type { SheetView } from "@/lib/plans/api-types";
 import { pageSizeAt1, viewportFor } from "@/lib/plans/viewer/coordinates";
 import { baseRenderScale, detailRegion } from "@/lib/plans/viewer/render-plan";
@@ -108,7 +107,14 @@ export function SheetViewer({ scope, initialSheet, canWrite, plansHref }: { scop
   const activeType = data.openingTypes.find((t) => t.id === tools.activeTypeId);
 
   return (
-    <div className={fullWindow ? "fixed inset-0 z-50 flex flex-col bg-maple-50" : "flex h-[calc(100dvh-10rem)] min-h-[32rem] flex-col overflow-hidden rounded-lg border border-maple-200 bg-white"}>
+    // Wider than the page column (estimators need the room), as tall as the window allows; or the whole window.
+    <div
+      className={
+        fullWindow
+          ? "fixed inset-0 z-50 flex flex-col bg-maple-50"
+          : "relative left-1/2 flex h-[calc(100dvh-14.5rem)] min-h-[30rem] w-[calc(100vw-2rem)] max-w-[1800px] -translate-x-1/2 flex-col overflow-hidden rounded-lg border border-maple-200 bg-white"
+      }
+    >
       <header className="flex flex-wrap items-baseline gap-x-3 border-b border-maple-200 px-3 py-1.5">
         <a href={plansHref} className="text-xs text-spruce-700 underline">
           ← All sheets
@@ -139,7 +145,7 @@ export function SheetViewer({ scope, initialSheet, canWrite, plansHref }: { scop
         <div className="relative flex min-h-0 flex-1 flex-col">
           <ViewerSurface
             boxRef={boxRef}
-            file={planSetFileUrl(scope.orgSlug, scope.projectId, sheet.planSetId)}
+            file={{ orgSlug: scope.orgSlug, projectId: scope.projectId, planSetId: sheet.planSetId }}
             pageNumber={sheet.pageNumber}
             rotation={rotation}
             view={view}

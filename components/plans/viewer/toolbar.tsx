@@ -58,7 +58,7 @@ export function Toolbar(p: Props) {
           {TOOL_LABELS[tool]} <Kbd>{key}</Kbd>
         </Btn>
       ))}
-      {!p.calibrated && <span className="text-xs font-medium text-brass-700">⚠ Not calibrated: measuring is off until the sheet has a scale.</span>}
+      {!p.calibrated && <span className="text-xs font-medium text-brass-700">⚠ No scale yet: measuring is off</span>}
       <span className="mx-1 h-6 w-px bg-maple-300" aria-hidden />
       <Btn onClick={() => p.zoomBy(1 / 1.25)} aria-label="Zoom out">
         −

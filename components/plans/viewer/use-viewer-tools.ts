@@ -28,7 +28,8 @@ export function useViewerTools({ canWrite, inchesPerUnit, types, edits, notify }
 
   const setTool = useCallback(
     (t: Tool) => {
-      if (!canWrite && t !== "move" && t !== "measure") return;
+      // Read-only members may look and measure (checking the scale is measuring too), never change anything.
+      if (!canWrite && t !== "move" && t !== "measure" && t !== "check") return;
       if ((t === "measure" || t === "check" || t === "width") && !inchesPerUnit) {
         notify("info", "Measuring needs a calibrated sheet: pick two points on a known dimension, or choose the sheet's scale.");
         return;

@@ -13,7 +13,7 @@ const PdfPageLayer = dynamic(() => import("./pdf-page-layer"), { ssr: false });
 
 interface Props {
   boxRef: RefObject<HTMLDivElement | null>;
-  file: string;
+  file: { orgSlug: string; projectId: string; planSetId: string };
   pageNumber: number;
   rotation: number;
   view: View | null;
@@ -52,8 +52,7 @@ export function ViewerSurface(p: Props) {
       aria-label="Sheet drawing"
       role="application"
     >
-      {p.view && p.baseScale !== null && (
-        <PdfPageLayer
+      <PdfPageLayer
           file={p.file}
           pageNumber={p.pageNumber}
           rotation={p.rotation}
@@ -66,7 +65,6 @@ export function ViewerSurface(p: Props) {
           onPage={p.onPage}
           onError={p.onError}
         />
-      )}
       {!p.page && !p.loadError && (
         <p className="absolute top-4 left-4 rounded-md bg-white/90 px-3 py-2 text-sm text-graphite-700 shadow" role="status">
           Opening the sheet…

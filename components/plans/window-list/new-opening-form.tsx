@@ -51,7 +51,7 @@ export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: strin
         {create.isError && <Notice tone="error">{create.error.message}</Notice>}
         {!create.isError && count > 0 && <Notice tone="error">{count === 1 ? "One field needs attention." : `${count} fields need attention.`}</Notice>}
         {added && <Notice>Added {added.mark}: {tape(added.width)} × {tape(added.height)}, setback {tape(added.setback)}.</Notice>}
-        <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
           <Field label="Mark" name="new-mark" error={errors.mark}>
             <TextInput name="new-mark" placeholder="W1" maxLength={12} value={draft.mark} onChange={(e) => set("mark", e.target.value)} error={errors.mark} />
           </Field>
@@ -61,14 +61,9 @@ export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: strin
           <Field label="Height" name="new-height" error={errors.height}>
             <TextInput name="new-height" placeholder={`59 1/2 or 4'-11 1/2"`} value={draft.height} onChange={(e) => set("height", e.target.value)} error={errors.height} />
           </Field>
-          {draft.setbackFrom === "typed" && (
-            <Field label="Setback" name="new-setback" error={errors.setback} hint="Wall face to jamb edge">
-              <TextInput name="new-setback" placeholder="4 9/16" value={draft.setback} onChange={(e) => set("setback", e.target.value)} error={errors.setback} />
-            </Field>
-          )}
         </div>
         <fieldset className="space-y-2">
-          <legend className="text-sm font-semibold text-graphite-900">Setback</legend>
+          <legend className="text-sm font-semibold text-graphite-900">Setback (finished wall face to jamb edge)</legend>
           <div className="flex flex-wrap gap-4 text-sm">
             {(
               [
@@ -82,6 +77,13 @@ export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: strin
               </label>
             ))}
           </div>
+          {draft.setbackFrom === "typed" && (
+            <div className="max-w-xs">
+              <Field label="Setback" name="new-setback" error={errors.setback}>
+                <TextInput name="new-setback" placeholder="4 9/16" value={draft.setback} onChange={(e) => set("setback", e.target.value)} error={errors.setback} />
+              </Field>
+            </div>
+          )}
           {draft.setbackFrom === "wall" && <WallBuildUpFields wall={draft.wall} onChange={(wall) => set("wall", wall)} errors={errors} />}
         </fieldset>
         <TrimSpecFields draft={draft} set={set} errors={errors} />

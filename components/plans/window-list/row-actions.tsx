@@ -11,14 +11,15 @@ export function RowActions({ row }: { row: OpeningTypeView }) {
   return (
     <Button
       look="danger"
-      className="px-2 py-0.5 text-xs"
+      className="px-1.5 py-0.5 text-xs"
+      title={`Delete ${row.mark}`}
       disabled={busy}
       onClick={() => {
         if (confirm(`Delete opening type ${row.mark} from the window list?`)) remove(row);
       }}
       aria-label={`Delete ${row.mark}`}
     >
-      {busy ? "Deleting…" : "Delete"}
+      {busy ? "…" : <span aria-hidden>✕</span>}
     </Button>
   );
 }

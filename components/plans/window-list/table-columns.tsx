@@ -53,12 +53,12 @@ export const columns = helper.columns([
     meta: { column: "apron" },
   }),
   length("extension", (r) => effectiveTrim(r.trimSpec).extensionThickness.value),
-  helper.accessor((r) => r.notes ?? "", { id: "notes", header: COLUMN_LABELS.notes, sortFn: "alphanumeric", cell: cell("notes"), meta: { column: "notes", width: "min-w-40" } }),
+  helper.accessor((r) => r.notes ?? "", { id: "notes", header: COLUMN_LABELS.notes, sortFn: "alphanumeric", cell: cell("notes"), meta: { column: "notes", width: "min-w-28 max-w-48" } }),
   helper.accessor("count", {
     id: "count",
     header: COLUMN_LABELS.count,
     sortFn: "basic",
-    cell: ({ row }) => <span className="font-semibold">{row.original.count}</span>,
+    cell: ({ row }) => <span className="inline-block py-1 font-semibold">{row.original.count}</span>,
     meta: { align: "end", column: "count" },
   }),
   helper.display({

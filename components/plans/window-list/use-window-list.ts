@@ -89,6 +89,7 @@ export function useWindowList(orgSlug: string, projectId: string, canWrite: bool
     remove: (row) => del.mutate(row),
     removing: del.isPending ? (del.variables?.id ?? null) : null,
     notices,
+    dismiss: (rowId: string) => notify(rowId, null),
   };
 
   const added = (row: OpeningTypeView) =>

@@ -22,6 +22,7 @@ export interface WindowListControls {
   remove: (row: OpeningTypeView) => void;
   removing: string | null;
   notices: Record<string, RowNotice>;
+  dismiss: (rowId: string) => void;
 }
 
 export const WindowListContext = createContext<WindowListControls | null>(null);

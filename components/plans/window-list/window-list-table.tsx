@@ -10,7 +10,7 @@ const SORT_WORD = { asc: "ascending", desc: "descending" } as const;
 
 /** The window list as a dense, sortable table; rows must be stable (memoised) between renders. */
 export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
-  const { canWrite, notices } = useWindowListControls();
+  const { canWrite, notices, dismiss } = useWindowListControls();
   const [sorting, setSorting] = useState<SortingState>([{ id: "mark", desc: false }]);
   const table = useTable({
     features,
@@ -39,7 +39,7 @@ export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
                       key={header.id}
                       scope="col"
                       aria-sort={sorted ? SORT_WORD[sorted] : undefined}
-                      className={`whitespace-nowrap border-b border-maple-200 px-2 py-2 font-semibold ${end ? "text-right" : "text-left"}`}
+                      className={`whitespace-nowrap border-b border-maple-200 px-1.5 py-2 font-semibold ${end ? "text-right" : "text-left"}`}
                     >
                       {header.column.getCanSort() ? (
                         <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-graphite-900">
@@ -70,7 +70,7 @@ export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
                       const meta = c.column.columnDef.meta;
                       const kind = meta?.align === "end" ? "num whitespace-nowrap" : meta?.column === "notes" ? "" : "whitespace-nowrap";
                       return (
-                        <td key={c.id} className={`px-2 py-1 ${kind} ${meta?.width ?? ""} ${meta?.column === "mark" ? "font-semibold" : ""}`}>
+                        <td key={c.id} className={`px-1.5 py-1 ${kind} ${meta?.width ?? ""} ${meta?.column === "mark" ? "font-semibold" : ""}`}>
                           <table.FlexRender cell={c} />
                         </td>
                       );
@@ -78,9 +78,12 @@ export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
                 </tr>
                 {notice && (
                   <tr>
-                    <td colSpan={visible.length} className={`px-2 pb-2 text-xs font-medium ${notice.tone === "error" ? "text-alarm-700" : "text-graphite-700"}`} role="alert">
+                    <td colSpan={visible.length} className={`px-1.5 pb-2 text-xs font-medium ${notice.tone === "error" ? "text-alarm-700" : "text-graphite-700"}`} role="alert">
                       {notice.tone === "error" ? "⚠ " : ""}
-                      {row.original.mark}: {notice.text}
+                      {row.original.mark}: {notice.text}{" "}
+                      <button type="button" className="ml-1 font-semibold text-graphite-700 underline" onClick={() => dismiss(row.id)}>
+                        Dismiss
+                      </button>
                     </td>
                   </tr>
                 )}

@@ -74,5 +74,5 @@ export function clampPan(view: View, page: Size, box: Size, keep = 48): View {
 /** One wheel notch or trackpad delta → a zoom factor; lines and pages are turned into pixels first. */
 export function wheelFactor(deltaY: number, deltaMode: number): number {
   const px = deltaMode === 1 ? deltaY * 16 : deltaMode === 2 ? deltaY * 400 : deltaY;
-  return Math.exp(-Math.max(-300, Math.min(300, px)) * 0.0015);
+  return Math.exp(-Math.max(-1200, Math.min(1200, px)) * 0.0015);
 }

@@ -28,7 +28,7 @@ export const COLUMN_LABELS: Record<ColumnId, string> = {
   reveal: "Reveal",
   horn: "Horn",
   apron: "Apron",
-  extension: "Ext. thick.",
+  extension: "Ext. thk.",
   notes: "Notes",
   count: "In job",
 };

@@ -22,8 +22,8 @@ export async function handleApi(ctx: StandIn, req: IncomingMessage, res: ServerR
     if (!endpoint) return sendJson(res, 404, { error: `Unknown endpoint ${pathname}` });
     sendJson(res, 200, await endpoint(ctx, body, ctx.publicUrl ?? requestOrigin(req, ctx.selfUrl)));
   } catch (error) {
-    if (error instanceof HttpError) return sendJson(res, error.status, { error: error.message });
-    throw error;
+    if (!(error instanceof HttpError)) throw error;
+    sendJson(res, error.status, { error: error.message }, error.status === 413 ? { Connection: "close" } : {});
   }
 }
 
@@ -45,7 +45,7 @@ function registerRoute(ctx: StandIn, req: IncomingMessage, res: ServerResponse, 
   } catch {
     throw new HttpError(400, "callbackUrl is not a URL");
   }
-  if (target.protocol !== "http:" && target.protocol !== "https:") throw new HttpError(400, "callbackUrl must be http(s)");
+  if (!["http:", "https:"].includes(target.protocol)) throw new HttpError(400, "callbackUrl must be http(s)");
   // The SDK keeps `slug` apart from the URL it sends, so the URL arrives without it.
   if (!target.searchParams.has("slug")) target.searchParams.set("slug", callbackSlug);
   const registration = {
@@ -116,7 +116,7 @@ const V6: Record<string, Endpoint> = {
   },
   async updateACL(ctx, body) {
     for (const u of updates(body)) {
-      if (u.acl !== "public-read" && u.acl !== "private") throw new HttpError(400, "acl must be public-read or private");
+      if (u.acl !== "public-read" && u.acl !== "private") throw new HttpError(400, "acl: public-read or private");
       await ctx.store.update((await one(ctx, idsOf(u))).key, { acl: u.acl });
     }
     return { success: true };

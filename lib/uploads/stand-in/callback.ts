@@ -42,29 +42,37 @@ export async function runCallback(
     return outcome;
   }
 
+  // Delivery runs beside the wait rather than before it: the app answers our POST only once its
+  // `onUploadComplete` is done, and the client's PUT must be answered by the result timer even if that is slow.
+  void postCallback(ctx, registration.callbackUrl, payload, signature).then((failure) => {
+    if (failure) ctx.registry.settle(file.key, { error: failure });
+  });
+  return outcome;
+}
+
+/** POSTs the signed callback to the app; resolves why the app could not take it, or null. */
+async function postCallback(ctx: StandIn, url: string, payload: string, signature: string): Promise<string | null> {
   try {
-    const response = await fetch(registration.callbackUrl, {
+    const response = await fetch(url, {
       method: "POST",
       headers: {
-        "Content-Type": "application/json",
+        "content-type": "application/json",
         "uploadthing-hook": "callback",
         "x-uploadthing-signature": signature,
       },
       body: payload,
-      signal: AbortSignal.timeout(ctx.limits.callbackTimeoutMs),
+      signal: AbortSignal.any([AbortSignal.timeout(ctx.limits.callbackDeliveryMs), ctx.shutdown]),
     });
     await response.body?.cancel();
-    if (!response.ok) {
-      ctx.log(`upload callback to ${registration.callbackUrl} answered HTTP ${response.status}`);
-      ctx.registry.settle(file.key, { error: `The app refused the upload callback (HTTP ${response.status})` });
-    }
+    if (response.ok) return null;
+    ctx.log(`upload callback to ${url} answered HTTP ${response.status}`);
+    return `The app refused the upload callback (HTTP ${response.status})`;
   } catch (error) {
-    // A timeout is the app being slow, which the result timer already answers with `serverData: null`;
-    // anything else means the app could not be reached and must not look like success.
-    if ((error as Error).name !== "TimeoutError") {
-      ctx.log(`upload callback to ${registration.callbackUrl} failed: ${(error as Error).message}`);
-      ctx.registry.settle(file.key, { error: "The app could not be reached for the upload callback" });
-    }
+    // A slow app is what the result timer is for, and shutdown is no one's fault; anything else means the
+    // app could not be reached, which must not look like success.
+    const name = (error as Error).name;
+    if (name === "TimeoutError" || name === "AbortError") return null;
+    ctx.log(`upload callback to ${url} failed: ${(error as Error).message}`);
+    return "The app could not be reached for the upload callback";
   }
-  return outcome;
 }

@@ -32,6 +32,8 @@ export type Limits = {
   registrationWaitMs: number;
   registrationTtlMs: number;
   requestTimeoutMs: number;
+  /** How long the callback POST to the app may take; longer than the result wait, so a slow app still gets it. */
+  callbackDeliveryMs: number;
   /** JSON bodies (API calls, callback results) are small; anything bigger is refused. */
   maxJsonBytes: number;
   /** How long a HEAD waits for an in-flight PUT of the same key before reporting its resume point. */
@@ -39,9 +41,11 @@ export type Limits = {
 };
 
 export function limitsFrom(opts: UploadStandInOptions): Limits {
+  const callbackTimeoutMs = opts.callbackTimeoutMs ?? 15_000;
   return {
     maxFileBytes: opts.maxFileBytes ?? 256 * 1024 * 1024,
-    callbackTimeoutMs: opts.callbackTimeoutMs ?? 15_000,
+    callbackTimeoutMs,
+    callbackDeliveryMs: Math.max(30_000, callbackTimeoutMs * 2),
     registrationWaitMs: opts.registrationWaitMs ?? 15_000,
     registrationTtlMs: opts.registrationTtlMs ?? 60 * 60_000,
     requestTimeoutMs: opts.requestTimeoutMs ?? 10 * 60_000,
@@ -62,6 +66,8 @@ export type StandIn = {
   selfUrl: string;
   publicUrl: string | undefined;
   log: (line: string) => void;
+  /** Aborted by close(), so no callback to the app outlives the stand-in. */
+  shutdown: AbortSignal;
 };
 
 /** File links for a stored key, the shapes the SDK expects back from an upload. */

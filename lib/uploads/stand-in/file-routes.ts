@@ -63,6 +63,7 @@ function byteRange(header: string | undefined, size: number): [number, number] |
 /** `inline; filename="…"; filename*=UTF-8''…` — an ASCII fallback plus the exact name for modern browsers. */
 function disposition(file: StoredFile) {
   const ascii = file.name.replace(/[^\x20-\x7e]|["\\%]/g, "_");
-  const exact = encodeURIComponent(file.name).replace(/['()*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`);
+  const hex = (c: string) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`;
+  const exact = encodeURIComponent(file.name).replace(/['()*]/g, hex);
   return `${file.contentDisposition}; filename="${ascii}"; filename*=UTF-8''${exact}`;
 }

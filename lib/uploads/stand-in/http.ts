@@ -40,18 +40,28 @@ export class HttpError extends Error {
   }
 }
 
-/** Reads a JSON body, refusing anything past `limit` bytes instead of buffering it. */
+/**
+ * Reads a JSON body, refusing anything past `limit` bytes instead of buffering it. On overflow it stops
+ * reading but leaves the socket alone, so the 413 can still be written (with `Connection: close`).
+ */
 export async function readJson(req: IncomingMessage, limit: number): Promise<Record<string, unknown>> {
   const declared = Number(req.headers["content-length"] ?? 0);
   if (declared > limit) throw new HttpError(413, "Request body too large");
-  const chunks: Buffer[] = [];
-  let total = 0;
-  for await (const chunk of req as AsyncIterable<Buffer>) {
-    total += chunk.length;
-    if (total > limit) throw new HttpError(413, "Request body too large");
-    chunks.push(chunk);
-  }
-  const text = Buffer.concat(chunks).toString("utf8");
+  const raw = await new Promise<Buffer>((resolve, reject) => {
+    const chunks: Buffer[] = [];
+    let total = 0;
+    const onData = (chunk: Buffer) => {
+      total += chunk.length;
+      if (total <= limit) return void chunks.push(chunk);
+      req.off("data", onData);
+      req.pause();
+      reject(new HttpError(413, "Request body too large"));
+    };
+    req.on("data", onData);
+    req.once("end", () => resolve(Buffer.concat(chunks)));
+    req.once("error", reject);
+  });
+  const text = raw.toString("utf8");
   let parsed: unknown;
   try {
     parsed = text ? JSON.parse(text) : {};

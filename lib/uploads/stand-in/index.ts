@@ -25,6 +25,7 @@ export async function startUploadStandIn(opts: UploadStandInOptions): Promise<Up
   const store = new UploadStore(opts.dataDir);
   await store.init();
   const registry = new CallbackRegistry(limits.registrationTtlMs);
+  const shutdown = new AbortController();
   const ctx: StandIn = {
     apiKey,
     appId,
@@ -35,6 +36,7 @@ export async function startUploadStandIn(opts: UploadStandInOptions): Promise<Up
     selfUrl: "",
     publicUrl: opts.publicUrl?.replace(/\/+$/, ""),
     log: opts.log ?? (() => {}),
+    shutdown: shutdown.signal,
   };
 
   const server = createServer((req, res) => {
@@ -66,6 +68,7 @@ export async function startUploadStandIn(opts: UploadStandInOptions): Promise<Up
     url: ctx.selfUrl,
     close: () =>
       new Promise<void>((resolve) => {
+        shutdown.abort();
         registry.close();
         server.close(() => resolve());
         server.closeAllConnections();

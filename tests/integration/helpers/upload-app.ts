@@ -14,7 +14,8 @@ export async function serveUploadApp(handler: (request: Request) => Promise<Resp
       const hook = req.headers["uploadthing-hook"];
       if (typeof hook === "string") {
         const signature = req.headers["x-uploadthing-signature"];
-        hooks.push({ hook, slug: url.searchParams.get("slug"), signature: typeof signature === "string" ? signature : null });
+        const slug = url.searchParams.get("slug");
+        hooks.push({ hook, slug, signature: typeof signature === "string" ? signature : null });
       }
       const body = req.method === "GET" || req.method === "HEAD" ? undefined : await readBody(req);
       const response = await handler(new Request(url, { method: req.method, headers: toHeaders(req), body }));

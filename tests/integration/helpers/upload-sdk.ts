@@ -4,9 +4,11 @@ import { z } from "zod";
 import { localUploadToken } from "@/lib/uploads/token";
 import { pdfBytes } from "./upload-wire";
 
+type CompletedFile = { key: string; name: string; type: string; fileHash: string };
+
 /** What the test routes saw, so tests can check the app's hooks really ran. */
 export const seen = {
-  completed: [] as { metadata: { projectId: string }; file: { key: string; name: string; type: string; fileHash: string } }[],
+  completed: [] as { metadata: { projectId: string }; file: CompletedFile }[],
   brokenCalls: 0,
 };
 

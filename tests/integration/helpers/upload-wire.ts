@@ -18,11 +18,13 @@ export const bytesOf = async (res: Response) => new Uint8Array(await res.arrayBu
 export const pdf = (name: string, size: number) => ({ name, size, type: "application/pdf" });
 
 /** The request the SDK's app handler gets from the client before any upload: presigned URLs for `files`. */
-export async function presign(appUrl: string, slug: string, files: { name: string; size: number; type: string }[], input?: unknown) {
+type FileInfo = { name: string; size: number; type: string };
+
+export async function presign(appUrl: string, slug: string, files: FileInfo[], input?: unknown) {
   const res = await fetch(`${appUrl}?actionType=upload&slug=${slug}`, {
     method: "POST",
     headers: { "content-type": "application/json" },
-    body: JSON.stringify({ files: files.map((f) => ({ ...f, lastModified: 1_700_000_000_000 })), input: input ?? null }),
+    body: JSON.stringify({ files: files.map((f) => ({ ...f, lastModified: 0 })), input: input ?? null }),
   });
   if (!res.ok) throw new Error(`presign failed: ${res.status} ${await res.text()}`);
   return (await res.json()) as { url: string; key: string; name: string; customId: string | null }[];
@@ -64,10 +66,15 @@ export function putThenDrop(url: string, bytes: Uint8Array, start: number, sent:
 }
 
 /** Signs an upload URL for `key` like the SDK does — for requests the SDK itself would never make. */
-export function signUpload(base: string, key: string, apiKey: string, appId: string, file: { name: string; size: number }) {
+export function signUpload(base: string, key: string, apiKey: string, appId: string, file: FileInfo) {
   const url = new URL(`${base}/${key}`);
   url.searchParams.append("expires", String(Date.now() + 60_000));
-  const data = { "x-ut-identifier": appId, "x-ut-file-name": file.name, "x-ut-file-size": file.size, "x-ut-file-type": "application/pdf" };
+  const data = {
+    "x-ut-identifier": appId,
+    "x-ut-file-name": file.name,
+    "x-ut-file-size": file.size,
+    "x-ut-file-type": file.type,
+  };
   for (const [name, value] of Object.entries(data)) url.searchParams.append(name, encodeURIComponent(String(value)));
   const signature = `hmac-sha256=${createHmac("sha256", apiKey).update(url.toString()).digest("hex")}`;
   url.searchParams.append("signature", signature);

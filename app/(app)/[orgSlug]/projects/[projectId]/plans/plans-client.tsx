@@ -35,6 +35,7 @@ export function PlansView({ orgSlug, projectId, canWrite }: { orgSlug: string; p
               unitTypes={units}
               canWrite={canWrite}
               notices={data.notices}
+              onDismiss={data.dismiss}
               onSave={data.saveSheet}
             />
           )}

@@ -1,0 +1,84 @@
+import { and, eq } from "drizzle-orm";
+import { UTApi, UTFile } from "uploadthing/server";
+import { db } from "../client";
+import { planSets, projects } from "../schema";
+import { createPlanSet } from "../queries/plan-sets";
+import { listSheets, updateSheet } from "../queries/sheets";
+import { createUnitType } from "../queries/unit-types";
+import { createOpeningType } from "../queries/opening-types";
+import { createTag } from "../queries/tags";
+import { inspectPdf } from "@/lib/pdf/inspect";
+import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
+import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
+import type { TrimSpec } from "@/takeoff";
+
+/** Invented counts for the invented building: how many of each unit the job has. */
+const UNIT_COUNTS: Record<string, number> = { "Type A": 18, "Type B": 12, "Type C": 6 };
+
+/** Window-list trim: the bathroom window W4 is picture-framed, the rest stool-and-apron (invented). */
+const SPEC: Record<WindowMark, TrimSpec> = {
+  W1: { style: "stool-and-apron", casingWidth: 2.5, casingThickness: 0.6875 },
+  W2: { style: "stool-and-apron", casingWidth: 2.5, casingThickness: 0.6875 },
+  W3: { style: "stool-and-apron", casingWidth: 3.5, casingThickness: 0.75 },
+  W4: { style: "picture-frame", casingWidth: 2.5, casingThickness: 0.6875 },
+};
+
+/**
+ * The demo project's drawings: a generated plan set stored through the upload service (the local
+ * stand-in), its sheets, unit types and window list, most sheets calibrated and some tagged — so a
+ * newcomer sees the workflow under way. Skips a project that already has plan sets.
+ */
+export async function seedDemoPlans(orgId: string, projectName: string, userId: string) {
+  const [project] = await db.select({ id: projects.id }).from(projects).where(and(eq(projects.orgId, orgId), eq(projects.name, projectName)));
+  if (!project) return false;
+  const scope = { orgId, projectId: project.id, userId };
+  const existing = await db.select({ id: planSets.id }).from(planSets).where(eq(planSets.projectId, project.id)).limit(1);
+  if (existing.length > 0) return false;
+
+  const { bytes, sheets: drawn } = await generatePlanSet();
+  useLocalUploadStandInUnlessConfigured();
+  const name = "Larkspur-Commons-Bldg-C-Architectural.pdf";
+  const [uploaded] = await new UTApi().uploadFiles([new UTFile([Buffer.from(bytes)], name, { type: "application/pdf" })]);
+  if (!uploaded?.data) throw new Error(`could not store the demo plan set: ${uploaded?.error?.message ?? "no answer"}`);
+  const inspection = await inspectPdf(bytes);
+  await createPlanSet(scope, { key: uploaded.data.key, name, size: bytes.byteLength }, inspection.pages);
+
+  const unitTypes = new Map<string, string>();
+  for (const [typeName, count] of Object.entries(UNIT_COUNTS)) unitTypes.set(typeName, (await createUnitType(scope, { name: typeName, count })).id);
+  const openingTypes = new Map<string, string>();
+  for (const [mark, size] of Object.entries(DEMO_WINDOW_TYPES) as [WindowMark, (typeof DEMO_WINDOW_TYPES)[WindowMark]][]) {
+    const created = await createOpeningType(scope, {
+      mark,
+      width: size.widthInches,
+      height: size.heightInches,
+      wallBuildUp: { stud: "2x6", wallboard: "1/2", frameDepth: 4.5625 },
+      trimSpec: SPEC[mark],
+      notes: size.description,
+    });
+    openingTypes.set(mark, created.id);
+  }
+
+  // Calibrate all but the last sheet (by the overall dimension; the first also gets its printed scale) and tag the first two.
+  const stored = await listSheets(scope);
+  for (const [i, sheet] of stored.entries()) {
+    const plan = drawn[i]!;
+    const unitTypeId = plan.unitTypeName ? (unitTypes.get(plan.unitTypeName) ?? null) : null;
+    if (i === stored.length - 1) {
+      await updateSheet(scope, sheet.id, { version: sheet.version, unitTypeId });
+      continue;
+    }
+    const k = plan.knownDimension;
+    await updateSheet(scope, sheet.id, {
+      version: sheet.version,
+      unitTypeId,
+      calibrationPoints: { ax: k.ax, ay: k.ay, bx: k.bx, by: k.by, length: k.inches },
+      ...(i === 0 ? { scale: { ratio: 48, label: `1/4" = 1'-0"` } } : {}),
+    });
+    if (i < 2) {
+      for (const w of plan.windows) {
+        await createTag(scope, { sheetId: sheet.id, openingTypeId: openingTypes.get(w.mark)!, x: w.x, y: w.y });
+      }
+    }
+  }
+  return true;
+}

@@ -27,6 +27,8 @@ export interface PlanSetGroupProps {
 /** One uploaded PDF and its sheets; the PDF is loaded once here for all of their thumbnails. */
 export function PlanSetGroup({ orgSlug, projectId, planSetId, name, sheets, unitTypes, canWrite, notices, onDismiss, onSave }: PlanSetGroupProps) {
   const [pdf, setPdf] = useState<PlanSetPdf>({ pdf: null, state: "loading" });
+  // A long set folds away so the next one is in reach; folded rows draw no thumbnails.
+  const [open, setOpen] = useState(true);
   const calibrated = sheets.filter((s) => s.inchesPerUnit !== null).length;
   const tags = sheets.reduce((n, s) => n + s.tagCount, 0);
 
@@ -34,7 +36,12 @@ export function PlanSetGroup({ orgSlug, projectId, planSetId, name, sheets, unit
     <section aria-labelledby={`set-${planSetId}`} className="rounded-lg border border-maple-200 bg-white">
       <header className="flex flex-wrap items-baseline justify-between gap-2 border-b border-maple-200 bg-maple-100 px-4 py-2">
         <h3 id={`set-${planSetId}`} className="min-w-0 truncate font-semibold text-graphite-900" title={name}>
-          {name}
+          <button type="button" onClick={() => setOpen(!open)} aria-expanded={open} aria-controls={`sheets-${planSetId}`} className="inline-flex items-center gap-2 hover:underline">
+            <span aria-hidden className="inline-block w-3 text-xs text-graphite-600">
+              {open ? "▾" : "▸"}
+            </span>
+            {name}
+          </button>
         </h3>
         <p className="text-xs text-graphite-700">
           <span className="num">{sheets.length}</span> sheet{sheets.length === 1 ? "" : "s"} · <span className="num">{calibrated}</span> calibrated ·{" "}
@@ -50,7 +57,7 @@ export function PlanSetGroup({ orgSlug, projectId, planSetId, name, sheets, unit
         onFail={() => setPdf({ pdf: null, state: "unavailable" })}
       />
       <PlanSetPdfContext value={pdf}>
-        <ul className="px-4">
+        <ul id={`sheets-${planSetId}`} hidden={!open} className="px-4">
           {sheets.map((sheet) => (
             <SheetRow
               key={sheet.id}

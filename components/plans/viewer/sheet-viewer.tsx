@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useEffect, useMemo, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { PDFPageProxy } from "pdfjs-dist";
 import type { SheetView } from "@/lib/plans/api-types";
 import { pageSizeAt1, viewportFor } from "@/lib/plans/viewer/coordinates";
@@ -33,8 +33,12 @@ export function SheetViewer({ scope, initialSheet, canWrite, plansHref }: { scop
   const notify = useCallback((tone: Notice["tone"], text: string) => setNotice({ tone, text, at: Date.now() }), []);
   const saveSheet = useSheetMutation(scope, notify);
   const save = useCallback((patch: SheetPatch) => saveSheet.mutateAsync(patch).then(() => true, () => false), [saveSheet]);
-  const mutations = useTagMutations(scope, notify);
+  // The undo history is made after the mutations it drives, so a tag deleted elsewhere reaches it via a ref.
+  const forget = useRef<(tagId: string) => void>(() => undefined);
+  const onGone = useCallback((tagId: string) => forget.current(tagId), []);
+  const mutations = useTagMutations(scope, notify, onGone);
   const edits = useUndoableTagEdits(mutations, notify);
+  useEffect(() => void (forget.current = edits.forget), [edits.forget]);
   const ipu = sheet.inchesPerUnit;
   const tools = useViewerTools({ canWrite, inchesPerUnit: ipu, types: data.openingTypes, edits, notify });
 
@@ -159,7 +163,6 @@ export function SheetViewer({ scope, initialSheet, canWrite, plansHref }: { scop
             loadError={loadError}
             tool={tools.tool}
             gestures={gestures}
-            panning={false}
           >
             {vp && (
               <>

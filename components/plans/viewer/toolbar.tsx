@@ -1,6 +1,6 @@
 "use client";
 
-import type { ReactNode } from "react";
+import type { ButtonHTMLAttributes, ReactNode } from "react";
 import { Kbd } from "./kbd";
 import { TOOL_LABELS, type Tool } from "./tools";
 
@@ -21,7 +21,7 @@ interface Props {
   showHelp: () => void;
 }
 
-function Btn({ active, children, ...rest }: { active?: boolean; children: ReactNode } & React.ButtonHTMLAttributes<HTMLButtonElement>) {
+function Btn({ active, children, ...rest }: { active?: boolean; children: ReactNode } & ButtonHTMLAttributes<HTMLButtonElement>) {
   return (
     <button
       type="button"

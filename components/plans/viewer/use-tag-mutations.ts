@@ -14,7 +14,7 @@ export type Notify = (tone: "info" | "error", text: string) => void;
  * after another, each reading the tag's latest version when it is sent: two quick moves of the same tag must
  * not refuse each other. A refusal puts the server's copy on screen (see `refused`).
  */
-export function useTagMutations(scope: SheetScope, notify: Notify) {
+export function useTagMutations(scope: SheetScope, notify: Notify, onGone: (tagId: string) => void) {
   const qc = useQueryClient();
   const tagsKey = keys.tags(scope);
   const base = projectBase(scope);
@@ -42,6 +42,7 @@ export function useTagMutations(scope: SheetScope, notify: Notify) {
       if (error instanceof ApiError && (error.status === 409 || error.status === 404)) {
         const current = error.status === 409 ? ((error.body.current as TagView | null | undefined) ?? null) : null;
         replace(id, current);
+        if (!current) onGone(id);
         notify("error", current ? error.message : "Someone else deleted this tag; it is gone from the sheet.");
         void qc.invalidateQueries({ queryKey: tagsKey });
         afterChange();
@@ -50,7 +51,7 @@ export function useTagMutations(scope: SheetScope, notify: Notify) {
       if (previous) setTags((ts) => (ts.some((t) => t.id === id) ? ts.map((t) => (t.id === id ? previous : t)) : [...ts, previous]));
       notify("error", error instanceof Error ? error.message : "The change was not saved.");
     },
-    [replace, notify, qc, tagsKey, afterChange, setTags],
+    [replace, onGone, notify, qc, tagsKey, afterChange, setTags],
   );
 
   const create = useCallback(

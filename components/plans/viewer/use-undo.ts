@@ -97,6 +97,8 @@ export function useUndoableTagEdits(m: TagMutations, notify: Notify) {
     remove,
     undo: useCallback(() => step("undo"), [step]),
     redo: useCallback(() => step("redo"), [step]),
+    /** Someone else deleted the tag: its history no longer applies. */
+    forget: useCallback((tagId: string) => setStack((s) => forgetTag(s, tagId)), [setStack]),
     canUndo: stack.past.length > 0,
     canRedo: stack.future.length > 0,
   };

@@ -27,7 +27,6 @@ interface Props {
   loadError: string | null;
   tool: Tool;
   gestures: ReturnType<typeof usePointerGestures>;
-  panning: boolean;
   children: ReactNode;
 }
 
@@ -48,23 +47,23 @@ export function ViewerSurface(p: Props) {
       {...p.gestures}
       onContextMenu={(e) => e.preventDefault()}
       onAuxClick={(e) => e.preventDefault()}
-      className={`relative min-h-0 flex-1 touch-none overflow-hidden bg-[#e9e4d8] select-none ${p.panning ? "cursor-grabbing" : CURSORS[p.tool]}`}
+      className={`relative min-h-0 flex-1 touch-none overflow-hidden bg-[#e9e4d8] select-none ${CURSORS[p.tool]}`}
       aria-label="Sheet drawing"
       role="application"
     >
       <PdfPageLayer
-          file={p.file}
-          pageNumber={p.pageNumber}
-          rotation={p.rotation}
-          view={p.view}
-          pageSize={p.pageSize}
-          baseScale={p.baseScale}
-          detail={p.detail}
-          dpr={p.dpr}
-          page={p.page}
-          onPage={p.onPage}
-          onError={p.onError}
-        />
+        file={p.file}
+        pageNumber={p.pageNumber}
+        rotation={p.rotation}
+        view={p.view}
+        pageSize={p.pageSize}
+        baseScale={p.baseScale}
+        detail={p.detail}
+        dpr={p.dpr}
+        page={p.page}
+        onPage={p.onPage}
+        onError={p.onError}
+      />
       {!p.page && !p.loadError && (
         <p className="absolute top-4 left-4 rounded-md bg-white/90 px-3 py-2 text-sm text-graphite-700 shadow" role="status">
           Opening the sheet…

@@ -17,7 +17,12 @@ export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: strin
   const [draft, setDraft] = useState<OpeningDraft>(EMPTY_DRAFT);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [added, setAdded] = useState<OpeningTypeView | null>(null);
-  const set = <K extends keyof OpeningDraft>(key: K, value: OpeningDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
+  const set = <K extends keyof OpeningDraft>(key: K, value: OpeningDraft[K]) => {
+    setDraft((d) => ({ ...d, [key]: value }));
+    // A message stays only until its field is changed; the next check says whether it still holds.
+    const stale = (k: string) => k === key || k === `trimSpec.${key}` || (key === "wall" && k.startsWith("wallBuildUp."));
+    setErrors((e) => (Object.keys(e).some(stale) ? Object.fromEntries(Object.entries(e).filter(([k]) => !stale(k))) : e));
+  };
 
   const create = useMutation({
     mutationFn: (body: unknown) => plansApi<{ openingType: OpeningTypeView }>(`${projectApi(orgSlug, projectId)}/opening-types`, { method: "POST", body }),

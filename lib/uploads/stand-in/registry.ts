@@ -65,6 +65,7 @@ export class CallbackRegistry {
           clearTimeout(timer);
           this.timers.delete(timer);
           waiters.delete(wake);
+          if (waiters.size === 0 && this.registrationWaiters.get(key) === waiters) this.registrationWaiters.delete(key);
           resolve(found);
         };
         const timer = this.after(maxMs, () => wake(null));

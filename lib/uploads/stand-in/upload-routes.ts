@@ -46,6 +46,7 @@ export function handleUpload(ctx: StandIn, req: IncomingMessage, res: ServerResp
     // A dropped connection ends the extraction early, so what was read still reaches the disk.
     if (!req.complete && !extractor.destroyed && !extractor.writableEnded) {
       req.unpipe(extractor);
+      extractor.end();
     }
   });
   req.pipe(extractor);

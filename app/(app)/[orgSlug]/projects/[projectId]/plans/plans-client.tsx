@@ -25,9 +25,10 @@ export function PlansView({ orgSlug, projectId, canWrite }: { orgSlug: string; p
           <h2 id="sheets-heading" className="text-base font-semibold">
             Sheets
           </h2>
-          {sheets.isPending && <p className="text-sm text-graphite-600">Loading sheets…</p>}
+          {(sheets.isPending || unitTypes.isPending) && <p className="text-sm text-graphite-600">Loading sheets…</p>}
           {sheets.isError && <Notice tone="error">{sheets.error.message}</Notice>}
-          {sheets.data && (
+          {/* Sheets wait for the unit types, so a sheet's picker never shows a unit type it cannot name. */}
+          {sheets.data && unitTypes.data && (
             <SheetList
               orgSlug={orgSlug}
               projectId={projectId}

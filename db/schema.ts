@@ -9,6 +9,7 @@ import { openingTypes, planSets, sheets, tags, unitTypes } from "./tables/plans"
 export * from "./tables/accounts";
 export * from "./tables/projects";
 export * from "./tables/plans";
+export * from "./tables/price-books";
 
 export const organisationsRelations = relations(organisations, ({ many }) => ({
   memberships: many(memberships),
@@ -52,3 +53,6 @@ export type PlanSet = typeof planSets.$inferSelect;
 export type Sheet = typeof sheets.$inferSelect;
 export type OpeningType = typeof openingTypes.$inferSelect;
 export type Tag = typeof tags.$inferSelect;
+
+export type PriceBook = typeof import("./tables/price-books").priceBooks.$inferSelect;
+export type PriceBookItem = typeof import("./tables/price-books").priceBookItems.$inferSelect;

@@ -12,6 +12,9 @@ export const permissions = {
   // Plan sets, sheets, unit types, the window list and tags.
   "plans.read": ["admin", "estimator", "project_manager"],
   "plans.write": ["admin", "estimator"],
+  // Price books: everyone prices with them, only admins change them.
+  "priceBook.read": ["admin", "estimator", "project_manager"],
+  "priceBook.write": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;

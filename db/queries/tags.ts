@@ -81,11 +81,13 @@ export async function updateTag(s: ProjectScope, id: string, input: TagUpdateInp
     .set({ ...set, version: sql`${tags.version} + 1`, updatedAt: new Date() })
     .where(and(scoped(s, id), eq(tags.version, version)))
     .returning({ id: tags.id });
+  // A tag deleted meanwhile answers 404 like one that never was: "gone" and "not yours" must look the same.
   if (rows.length === 0) throw stale(await getTag(s, id));
   return getTag(s, id);
 }
 
 export async function deleteTag(s: ProjectScope, id: string, version: number) {
   const rows = await db.delete(tags).where(and(scoped(s, id), eq(tags.version, version))).returning({ id: tags.id });
+  // A tag deleted meanwhile answers 404 like one that never was: "gone" and "not yours" must look the same.
   if (rows.length === 0) throw stale(await getTag(s, id));
 }

@@ -9,9 +9,9 @@ function utapi() {
 }
 
 /** The stored bytes of a file, fetched through a short-lived signed URL (the browser never sees it). */
-export async function fetchStoredFile(key: string): Promise<Response> {
+export async function fetchStoredFile(key: string, range?: string | null): Promise<Response> {
   const { ufsUrl } = await utapi().generateSignedURL(key, { expiresIn: 60 });
-  return fetch(ufsUrl);
+  return fetch(ufsUrl, range ? { headers: { range } } : undefined);
 }
 
 export async function deleteStoredFiles(keys: string[]) {

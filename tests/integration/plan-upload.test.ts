@@ -89,6 +89,14 @@ describe("uploading a plan set", () => {
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("application/pdf");
     expect(Buffer.compare(Buffer.from(await res.arrayBuffer()), Buffer.from(bytes))).toBe(0);
+    // A range comes back as a range, so the viewer can start on page 1 of a large set.
+    const part = await fileRoute.GET(
+      new NextRequest("http://127.0.0.1/x", { headers: { cookie: await sessionCookie(home.people.estimator), range: "bytes=0-99" } }),
+      { params: Promise.resolve({ orgSlug: home.org.slug, projectId: home.project.id, planSetId: result.planSetId }) },
+    );
+    expect(part.status).toBe(206);
+    expect(part.headers.get("content-range")).toBe(`bytes 0-99/${bytes.byteLength}`);
+    expect(Buffer.compare(Buffer.from(await part.arrayBuffer()), Buffer.from(bytes.subarray(0, 100)))).toBe(0);
     // …and not to another organisation, whose own slug cannot reach it either.
     const theirs = await call(fileRoute.GET, {
       method: "GET",

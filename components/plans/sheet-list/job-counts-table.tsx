@@ -29,7 +29,7 @@ export function JobCountsTable({ counts, openingTypes }: { counts: CountsView; o
       {types.length === 0 ? (
         <p className="text-sm text-graphite-600">The window list is empty: add opening types, then tag them on the sheets.</p>
       ) : (
-        <div className="overflow-x-auto">
+        <div className="relative overflow-x-auto">
           <table className="w-full border-collapse text-sm">
             <caption className="sr-only">Openings per unit type (all units of it) and for the whole job, by opening type</caption>
             <thead className="border-b border-maple-200 text-graphite-700">

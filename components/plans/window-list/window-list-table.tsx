@@ -22,8 +22,9 @@ export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
   });
   const visible = table.getAllLeafColumns().filter((c) => canWrite || c.id !== "actions");
 
+  // `relative`: the sr-only labels in cells are absolutely placed and would otherwise widen the page.
   return (
-    <div className="overflow-x-auto rounded-lg border border-maple-200 bg-white">
+    <div className="relative overflow-x-auto rounded-lg border border-maple-200 bg-white">
       <table className="w-full border-collapse text-sm">
         <caption className="sr-only">Window list: opening types of this project. Column headers sort the list.</caption>
         <thead className="bg-maple-100 text-graphite-700">

@@ -9,15 +9,19 @@ import { fetchStoredFile } from "@/lib/uploads/file-store";
 type Params = { orgSlug: string; projectId: string; planSetId: string };
 
 export const GET = withOrg<Params>(
-  async ({ params, org }) => {
+  async ({ req, params, org }) => {
     const { fileKey, name } = await getPlanSetFile(projectScope(org, params), parseId(params.planSetId, "plan set"));
-    const stored = await fetchStoredFile(fileKey);
+    // Ranges pass through, so pdf.js can show page 1 of a large set before the rest arrives.
+    const stored = await fetchStoredFile(fileKey, req.headers.get("range"));
+    if (stored.status === 416) return new Response(null, { status: 416, headers: passThrough(stored, ["content-range"]) });
     if (!stored.ok || !stored.body) throw new AppError(503, "The plan file is not available right now. Try again shortly.");
     return new Response(stored.body, {
+      status: stored.status === 206 ? 206 : 200,
       headers: {
+        ...passThrough(stored, ["content-length", "content-range"]),
+        "accept-ranges": "bytes",
         "content-type": "application/pdf",
         "content-disposition": `inline; filename*=UTF-8''${encodeURIComponent(name)}`,
-        ...(stored.headers.get("content-length") ? { "content-length": stored.headers.get("content-length")! } : {}),
         // Private: the bytes belong to one organisation; browsers may keep them, shared caches may not.
         "cache-control": "private, max-age=3600",
       },
@@ -25,3 +29,7 @@ export const GET = withOrg<Params>(
   },
   { permission: "plans.read" },
 );
+
+function passThrough(res: Response, names: string[]): Record<string, string> {
+  return Object.fromEntries(names.flatMap((n) => (res.headers.get(n) ? [[n, res.headers.get(n)!]] : [])));
+}

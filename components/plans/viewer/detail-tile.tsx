@@ -3,6 +3,7 @@
 import { useEffect, useRef, useState } from "react";
 import type { PDFPageProxy } from "pdfjs-dist";
 import type { DetailRegion } from "@/lib/plans/viewer/render-plan";
+import { markSheetRendered } from "@/lib/plans/viewer/render-marks";
 import type { View } from "@/lib/plans/viewer/view-transform";
 
 /**
@@ -34,6 +35,7 @@ export function DetailTile({ page, rotation, region, dpr, view }: { page: PDFPag
         holder.current?.querySelectorAll("canvas").forEach((old) => (old.width = 0));
         holder.current?.replaceChildren(canvas);
         setDrawn(region);
+        markSheetRendered("detail", region.zoom);
       },
       () => {
         // Cancelled by a newer view (or a broken page, which the base layer reports): nothing to show.

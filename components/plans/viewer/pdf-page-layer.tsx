@@ -10,6 +10,7 @@ import type { PDFPageProxy } from "pdfjs-dist";
 import { planSetFileUrl } from "@/components/plans/pdf-setup";
 import type { DetailRegion } from "@/lib/plans/viewer/render-plan";
 import type { Size, View } from "@/lib/plans/viewer/view-transform";
+import { markSheetRendered } from "@/lib/plans/viewer/render-marks";
 import { DetailTile } from "./detail-tile";
 
 // A stable object: react-pdf reloads the document whenever `options` changes identity.
@@ -63,7 +64,10 @@ export default function PdfPageLayer(props: PdfPageLayerProps) {
             canvasBackground="white"
             loading={null}
             onLoadSuccess={page ? undefined : onPage}
-            onRenderSuccess={() => setShown(scale)}
+            onRenderSuccess={() => {
+              setShown(scale);
+              markSheetRendered("page", scale);
+            }}
             onRenderError={onError}
           />
         ))}

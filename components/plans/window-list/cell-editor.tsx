@@ -105,7 +105,8 @@ export function CellEditor({ row, column }: { row: OpeningTypeView; column: Edit
         />
       )}
       {column === "apron" && (
-        <label className="mt-1 flex items-center gap-1 text-xs text-graphite-700">
+        // Pressing on the label would take focus from the inset field (and so save); keep focus where it is.
+        <label className="mt-1 flex items-center gap-1 text-xs text-graphite-700" onMouseDown={(e) => e.preventDefault()}>
           <input type="checkbox" checked={returns} onChange={(e) => setReturns(e.target.checked)} disabled={saving} />
           Return miters
         </label>

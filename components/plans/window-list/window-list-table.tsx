@@ -7,6 +7,8 @@ import { useWindowListControls } from "./window-list-context";
 
 const SORT_MARK = { asc: "▲", desc: "▼" } as const;
 const SORT_WORD = { asc: "ascending", desc: "descending" } as const;
+/** On a narrow screen the list scrolls sideways; the mark stays in view so each row stays named. */
+const STICKY = "sticky left-0 z-10";
 
 /** The window list as a dense, sortable table; rows must be stable (memoised) between renders. */
 export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
@@ -40,7 +42,9 @@ export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
                       key={header.id}
                       scope="col"
                       aria-sort={sorted ? SORT_WORD[sorted] : undefined}
-                      className={`whitespace-nowrap border-b border-maple-200 px-1.5 py-2 font-semibold ${end ? "text-right" : "text-left"}`}
+                      className={`whitespace-nowrap border-b border-maple-200 px-1.5 py-2 font-semibold ${end ? "text-right" : "text-left"} ${
+                        header.column.id === "mark" ? STICKY + " bg-maple-100" : ""
+                      }`}
                     >
                       {header.column.getCanSort() ? (
                         <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-graphite-900">
@@ -71,7 +75,7 @@ export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
                       const meta = c.column.columnDef.meta;
                       const kind = meta?.align === "end" ? "num whitespace-nowrap" : meta?.column === "notes" ? "" : "whitespace-nowrap";
                       return (
-                        <td key={c.id} className={`px-1.5 py-1 ${kind} ${meta?.width ?? ""} ${meta?.column === "mark" ? "font-semibold" : ""}`}>
+                        <td key={c.id} className={`px-1.5 py-1 ${kind} ${meta?.width ?? ""} ${meta?.column === "mark" ? `${STICKY} bg-white font-semibold` : ""}`}>
                           <table.FlexRender cell={c} />
                         </td>
                       );

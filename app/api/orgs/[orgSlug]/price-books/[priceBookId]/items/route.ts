@@ -1,0 +1,17 @@
+// POST /api/orgs/[orgSlug]/price-books/[priceBookId]/items — add a material to the book
+import { NextResponse } from "next/server";
+import { createPriceBookItem } from "@/db/queries/price-book-items";
+import { withOrg } from "@/lib/api/with-org";
+import { parseId, readJson } from "@/lib/api/read-input";
+import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
+
+type Params = { orgSlug: string; priceBookId: string };
+
+export const POST = withOrg<Params>(
+  async ({ req, params, org }) => {
+    const scope = { orgId: org.orgId, userId: org.userId, priceBookId: parseId(params.priceBookId, "price book") };
+    const item = await createPriceBookItem(scope, await readJson(req, priceBookItemCreateSchema));
+    return NextResponse.json({ item }, { status: 201 });
+  },
+  { permission: "priceBook.write" },
+);

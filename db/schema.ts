@@ -10,6 +10,7 @@ export * from "./tables/accounts";
 export * from "./tables/projects";
 export * from "./tables/plans";
 export * from "./tables/price-books";
+export * from "./tables/takeoffs";
 
 export const organisationsRelations = relations(organisations, ({ many }) => ({
   memberships: many(memberships),
@@ -56,3 +57,4 @@ export type Tag = typeof tags.$inferSelect;
 
 export type PriceBook = typeof import("./tables/price-books").priceBooks.$inferSelect;
 export type PriceBookItem = typeof import("./tables/price-books").priceBookItems.$inferSelect;
+export type Takeoff = typeof import("./tables/takeoffs").takeoffs.$inferSelect;

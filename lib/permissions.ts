@@ -15,6 +15,9 @@ export const permissions = {
   // Price books: everyone prices with them, only admins change them.
   "priceBook.read": ["admin", "estimator", "project_manager"],
   "priceBook.write": ["admin"],
+  // Takeoffs: estimators run them; everyone reads them.
+  "takeoff.read": ["admin", "estimator", "project_manager"],
+  "takeoff.run": ["admin", "estimator"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;

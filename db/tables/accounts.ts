@@ -1,6 +1,7 @@
 import { sql } from "drizzle-orm";
 import { check, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import type { TrimSpec } from "@/takeoff";
+import type { TakeoffSettings } from "@/lib/takeoffs/types";
 import { createdAt } from "./common";
 
 export const roleEnum = pgEnum("member_role", ["admin", "estimator", "project_manager"]);
@@ -26,6 +27,8 @@ export const organisations = pgTable(
     slug: text("slug").notNull(),
     // The company's usual trim spec; a new opening type starts from it. Null = the engine's defaults.
     trimDefaults: jsonb("trim_defaults").$type<TrimSpec>(),
+    // Kerf and waste allowance every takeoff of the company uses. Null = the defaults in lib/takeoffs/settings.ts.
+    takeoffSettings: jsonb("takeoff_settings").$type<TakeoffSettings>(),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("organisations_slug_key").on(t.slug)],

@@ -155,3 +155,16 @@ export function readItemsCsv(text: string): CsvRead {
   }
   return { rows: body.map((r) => readRow(r.line, r.fields, columns)), fileErrors: [] };
 }
+
+/** "Alder Bend Millwork — 2027" on 5 Jan 2027 → alder-bend-millwork-2027-items-2027-01-05.csv (ASCII, for the header). */
+export function csvFileName(bookName: string, on: Date): string {
+  const slug = bookName
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-+|-+$/g, "")
+    .slice(0, 60)
+    .replace(/-+$/, "");
+  return `${slug || "price-book"}-items-${on.toISOString().slice(0, 10)}.csv`;
+}

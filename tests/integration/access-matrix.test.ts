@@ -21,6 +21,12 @@ import * as openingTypeRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]
 import * as tagsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/route";
 import * as tagRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/[tagId]/route";
 import * as countsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/counts/route";
+import * as priceBooksRoute from "@/app/api/orgs/[orgSlug]/price-books/route";
+import * as priceBookRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/route";
+import * as priceBookItemsRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/items/route";
+import * as priceBookItemRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/items/[itemId]/route";
+import * as priceBookCsvRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/csv/route";
+import * as priceBookChangesRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/changes/route";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
 import { makeOrg, unique, type World } from "./helpers/world";
@@ -79,6 +85,24 @@ routes.push(
   { name: "move a tag", handler: tagRoute.PATCH, method: "PATCH", params: (w) => ({ ...proj(w), tagId: w.plans.tag.id }), body: () => ({ version: 1, x: 500, y: 320 }), allowed: writers, okStatus: 200 },
   { name: "delete a tag", handler: tagRoute.DELETE, method: "DELETE", path: "/api/x?version=1", params: (w) => ({ ...proj(w), tagId: w.plans.tag.id }), allowed: writers, okStatus: 204 },
   { name: "read counts", handler: countsRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
+);
+
+const book = (w: World) => ({ ...org(w), priceBookId: w.priceBook.book.id });
+const admins: Role[] = ["admin"];
+const importCsv = `name,kind,face_width,thickness,species,supplier_code,price 8'\nApron 3 1/2,apron,3 1/2,11/16,Poplar,,12.40\n`;
+routes.push(
+  { name: "list price books", handler: priceBooksRoute.GET, method: "GET", params: org, allowed: readers, okStatus: 200 },
+  { name: "create a price book", handler: priceBooksRoute.POST, method: "POST", params: org, body: () => ({ name: `Spring ${unique()}` }), allowed: admins, okStatus: 201 },
+  { name: "read a price book", handler: priceBookRoute.GET, method: "GET", params: book, allowed: readers, okStatus: 200 },
+  { name: "edit a price book", handler: priceBookRoute.PATCH, method: "PATCH", params: book, body: () => ({ version: 1, markup: 0.2 }), allowed: admins, okStatus: 200 },
+  { name: "delete a price book", handler: priceBookRoute.DELETE, method: "DELETE", path: "/api/x?version=1", params: book, allowed: admins, okStatus: 204 },
+  { name: "add a price-book item", handler: priceBookItemsRoute.POST, method: "POST", params: book, body: () => ({ name: "Apron 3 1/2", kind: "apron", faceWidth: "3 1/2", thickness: "11/16", stock: [{ length: "8'", price: 12.4 }] }), allowed: admins, okStatus: 201 },
+  { name: "edit a price-book item", handler: priceBookItemRoute.PATCH, method: "PATCH", params: (w) => ({ ...book(w), itemId: w.priceBook.item.id }), body: () => ({ version: 1, stock: [{ length: "8'", price: "10.60" }] }), allowed: admins, okStatus: 200 },
+  { name: "delete a price-book item", handler: priceBookItemRoute.DELETE, method: "DELETE", path: "/api/x?version=1", params: (w) => ({ ...book(w), itemId: w.priceBook.spareItem.id }), allowed: admins, okStatus: 204 },
+  { name: "export a price book as CSV", handler: priceBookCsvRoute.GET, method: "GET", params: book, allowed: readers, okStatus: 200 },
+  { name: "preview a CSV import", handler: priceBookCsvRoute.POST, method: "POST", params: book, body: () => ({ csv: importCsv, mode: "merge", apply: false }), allowed: admins, okStatus: 200 },
+  { name: "apply a CSV import", handler: priceBookCsvRoute.POST, method: "POST", params: book, body: () => ({ csv: importCsv, mode: "merge", apply: true }), allowed: admins, okStatus: 200 },
+  { name: "read a price book's change log", handler: priceBookChangesRoute.GET, method: "GET", params: book, allowed: readers, okStatus: 200 },
 );
 
 const expectedRefusal = (actor: Actor) => (actor === "anonymous" ? 401 : actor === "outsider" ? 404 : 403);
@@ -164,6 +188,19 @@ describe("ids from another organisation, through your own slug", () => {
     { name: "move their tag", route: { ...byName("move a tag"), params: (w) => ({ ...proj(w), tagId: other.plans.tag.id }) } },
     { name: "delete their tag", route: { ...byName("delete a tag"), params: (w) => ({ ...proj(w), tagId: other.plans.tag.id }) } },
     { name: "read their counts", route: { ...byName("read counts"), params: (w) => ({ ...org(w), projectId: other.project.id }) } },
+    ...[
+      "read a price book",
+      "edit a price book",
+      "delete a price book",
+      "add a price-book item",
+      "export a price book as CSV",
+      "preview a CSV import",
+      "apply a CSV import",
+      "read a price book's change log",
+    ].map((name) => ({ name: `${name}: theirs`, route: { ...byName(name), params: (w: World) => ({ ...org(w), priceBookId: other.priceBook.book.id }) } })),
+    { name: "edit their item in their book", route: { ...byName("edit a price-book item"), params: (w) => ({ ...org(w), priceBookId: other.priceBook.book.id, itemId: other.priceBook.item.id }) } },
+    { name: "edit their item through your book", route: { ...byName("edit a price-book item"), params: (w) => ({ ...book(w), itemId: other.priceBook.item.id }) } },
+    { name: "delete their item through your book", route: { ...byName("delete a price-book item"), params: (w) => ({ ...book(w), itemId: other.priceBook.spareItem.id }) } },
   ];
   it.each(foreign)("$name → 404, nothing changed", async ({ route }) => {
     const before = await snapshot();

@@ -11,6 +11,7 @@ import { createOpeningType } from "@/db/queries/opening-types";
 import { createTag } from "@/db/queries/tags";
 import { listSheets } from "@/db/queries/sheets";
 import { hashPassword } from "@/lib/auth/password";
+import { makePriceBook } from "./price-book-world";
 
 export const PASSWORD = "correct horse battery";
 export const unique = () => randomBytes(4).toString("hex");
@@ -61,6 +62,7 @@ export async function makeOrg(label = "Cedarline") {
   });
   const plans = await makePlans({ orgId: organisation.id, projectId: project.id, userId: user.id });
   return {
+    priceBook: await makePriceBook({ orgId: organisation.id, userId: user.id }),
     plans,
     org: organisation,
     people: { admin, estimator, project_manager: projectManager } satisfies Record<Role, Person>,

@@ -12,9 +12,13 @@ export const GET = withOrg<Params>(
   async ({ req, params, org }) => {
     const { fileKey, name } = await getPlanSetFile(projectScope(org, params), parseId(params.planSetId, "plan set"));
     // Ranges pass through, so pdf.js can show page 1 of a large set before the rest arrives.
-    const stored = await fetchStoredFile(fileKey, req.headers.get("range"));
+    const unavailable = () => new AppError(503, "The plan file is not available right now. Try again shortly.");
+    const stored = await fetchStoredFile(fileKey, req.headers.get("range")).catch((error) => {
+      console.error("file store", fileKey, error);
+      throw unavailable();
+    });
     if (stored.status === 416) return new Response(null, { status: 416, headers: passThrough(stored, ["content-range"]) });
-    if (!stored.ok || !stored.body) throw new AppError(503, "The plan file is not available right now. Try again shortly.");
+    if (!stored.ok || !stored.body) throw unavailable();
     return new Response(stored.body, {
       status: stored.status === 206 ? 206 : 200,
       headers: {

@@ -1,0 +1,37 @@
+import { index, jsonb, pgEnum, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/lib/takeoffs/types";
+import { createdAt } from "./common";
+import { organisations, users } from "./accounts";
+import { projects } from "./projects";
+import { priceBooks } from "./price-books";
+
+export const takeoffStatusEnum = pgEnum("takeoff_status", ["draft", "submitted"]);
+
+/**
+ * A computed, saved takeoff. Inputs, prices and result are snapshots taken when it ran, so a later
+ * change to the window list, the counts or the price book never rewrites it.
+ */
+export const takeoffs = pgTable(
+  "takeoffs",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orgId: uuid("org_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    projectId: uuid("project_id")
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    note: text("note"),
+    priceBookId: uuid("price_book_id").references(() => priceBooks.id, { onDelete: "set null" }),
+    status: takeoffStatusEnum("status").notNull().default("draft"),
+    inputs: jsonb("inputs").$type<TakeoffInputs>().notNull(),
+    prices: jsonb("prices").$type<TakeoffPrices>().notNull(),
+    result: jsonb("result").$type<TakeoffResult>().notNull(),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+    submittedAt: timestamp("submitted_at", { withTimezone: true }),
+    submittedBy: uuid("submitted_by").references(() => users.id, { onDelete: "set null" }),
+  },
+  (t) => [index("takeoffs_project_idx").on(t.projectId, t.createdAt)],
+);

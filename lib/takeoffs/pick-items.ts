@@ -1,0 +1,43 @@
+import { formatLength, type Material, type TrimSpec } from "@/takeoff";
+import type { PriceItemSnapshot } from "./types";
+
+/** Profiles are sold in nominal fractions; within 1/64 in two sizes are the same profile. */
+const SAME = 1 / 64;
+const near = (a: number, b: number) => Math.abs(a - b) < SAME;
+const size = (w: number, t: number) => `${formatLength(w)} × ${formatLength(t)}`;
+
+export class MissingItem extends Error {}
+
+const narrowestWideEnough = (items: PriceItemSnapshot[], width: number) =>
+  items.filter((i) => i.faceWidth >= width - SAME).sort((a, b) => a.faceWidth - b.faceWidth)[0];
+
+/**
+ * Which price-book item each material of one opening type is cut from:
+ * casing by its profile (face width × thickness); apron by the same profile, else from the casing
+ * itself (aprons are commonly cut from casing stock — common practice); stool and extension from the
+ * narrowest stock wide enough, since both are ripped to width.
+ */
+export function pickItems(
+  items: PriceItemSnapshot[],
+  mark: string,
+  spec: TrimSpec,
+  widths: { stool?: number; extension?: number },
+  casingOverride: PriceItemSnapshot | null,
+): Partial<Record<Material, PriceItemSnapshot>> {
+  const of = (kind: Material) => items.filter((i) => i.kind === kind);
+  const casing = casingOverride ?? of("casing").find((i) => near(i.faceWidth, spec.casingWidth) && near(i.thickness, spec.casingThickness));
+  if (!casing) throw new MissingItem(`${mark} needs casing ${size(spec.casingWidth, spec.casingThickness)}: the price book has none of that size.`);
+  const picked: Partial<Record<Material, PriceItemSnapshot>> = { casing };
+  if (spec.style === "stool-and-apron") {
+    picked.apron = of("apron").find((i) => near(i.faceWidth, casing.faceWidth) && near(i.thickness, casing.thickness)) ?? casing;
+    const stool = narrowestWideEnough(of("stool"), widths.stool ?? 0);
+    if (!stool) throw new MissingItem(`${mark} needs stool at least ${formatLength(widths.stool ?? 0)} wide: the price book has none that wide.`);
+    picked.stool = stool;
+  }
+  if (widths.extension !== undefined) {
+    const board = narrowestWideEnough(of("extension"), widths.extension);
+    if (!board) throw new MissingItem(`${mark} needs jamb extension ${formatLength(widths.extension)} wide: the price book has no extension stock that wide.`);
+    picked.extension = board;
+  }
+  return picked;
+}

@@ -1,0 +1,96 @@
+/**
+ * What a saved takeoff keeps: the inputs and prices as they were when it ran, and what the engine made
+ * of them. Plain JSON (it lives in jsonb). Lengths in inches, money in dollars.
+ */
+import type { CutPiece, LabourRates, Material, MaterialTotal, StockPlan, TrimSpec } from "@/takeoff";
+import type { Bid } from "@/takeoff";
+
+export interface TakeoffSettings {
+  /** Saw kerf taken by every cut. */
+  kerf: number;
+  /** Extra boards bought for defects and miscuts, percent of the optimised count per stock length. */
+  wastePercent: number;
+}
+
+export interface TakeoffInputs {
+  settings: TakeoffSettings;
+  /** An alternate: one casing item used for every window instead of each type's own profile. */
+  casingItemId: string | null;
+  unitTypes: { id: string; name: string; count: number }[];
+  openingTypes: { id: string; mark: string; width: number; height: number; setback: number; trimSpec: TrimSpec }[];
+  /** Tags per opening type: on each unit type's sheets (one unit), on common-area sheets, and job-wide. */
+  counts: { perUnit: Record<string, Record<string, number>>; commonAreas: Record<string, number>; job: Record<string, number> };
+}
+
+export interface PriceItemSnapshot {
+  id: string;
+  name: string;
+  kind: Material | "other";
+  faceWidth: number;
+  thickness: number;
+  species: string | null;
+  supplierCode: string | null;
+  stock: { length: number; price: number }[];
+}
+
+export interface TakeoffPrices {
+  priceBook: { id: string; name: string };
+  items: PriceItemSnapshot[];
+  labour: LabourRates;
+  markup: number;
+  taxRate: number;
+  taxLabour: boolean;
+}
+
+export interface OpeningTypeResult {
+  openingTypeId: string;
+  mark: string;
+  quantity: number;
+  spec: TrimSpec;
+  opening: { width: number; height: number; setback: number };
+  cutList: CutPiece[];
+  /** Price-book item each material of this type is cut from. */
+  items: Partial<Record<Material, string>>;
+}
+
+export interface BoardOrder {
+  itemId: string;
+  itemName: string;
+  material: Material;
+  supplierCode: string | null;
+  /** Rip width for extensions (the setback), and the board it is ripped from. */
+  width?: number;
+  stockWidth?: number;
+  pieces: number;
+  linearInches: number;
+  plan: StockPlan;
+  /** Boards per stock length with the waste allowance added (what to buy). */
+  toBuy: { stockLength: number; count: number; price: number }[];
+}
+
+export interface MaterialSummary {
+  material: Material;
+  linearFeet: number;
+  boardCount: number;
+  purchasedFeet: number;
+  offcutFeet: number;
+  /** Used length / purchased length of the optimised plan. */
+  yield: number;
+  cost: number;
+  lowerBound: number;
+  gapPercent: number;
+  allowanceBoards: number;
+  allowanceCost: number;
+}
+
+export interface TakeoffResult {
+  openingsTotal: number;
+  openingTypes: OpeningTypeResult[];
+  unitTypes: { unitTypeId: string; name: string; unitCount: number; perUnit: MaterialTotal[]; allUnits: MaterialTotal[] }[];
+  commonAreas: MaterialTotal[];
+  job: MaterialTotal[];
+  orders: BoardOrder[];
+  materials: MaterialSummary[];
+  labourMinutes: number;
+  bid: Bid;
+}

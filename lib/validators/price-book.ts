@@ -60,7 +60,8 @@ const bookFields = {
 export const priceBookCreateSchema = z.object(bookFields).partial().required({ name: true }).strict();
 export type PriceBookCreateInput = z.infer<typeof priceBookCreateSchema>;
 
-export const priceBookUpdateSchema = nonEmpty(z.object({ version, ...bookFields }).partial().required({ version: true }).strict());
+// `.extend` after `.partial`: a required version keeps its own message ("reload and try again").
+export const priceBookUpdateSchema = nonEmpty(z.object(bookFields).partial().extend({ version }).strict());
 export type PriceBookUpdateInput = z.infer<typeof priceBookUpdateSchema>;
 
 /** Bare numbers are inches, so "8" for an 8-foot board would mean 8 inches: nobody sells stock that short. */
@@ -99,7 +100,7 @@ const itemFields = {
 export const priceBookItemCreateSchema = z.object(itemFields).strict();
 export type PriceBookItemCreateInput = z.infer<typeof priceBookItemCreateSchema>;
 
-export const priceBookItemUpdateSchema = nonEmpty(z.object({ version, ...itemFields }).partial().required({ version: true }).strict());
+export const priceBookItemUpdateSchema = nonEmpty(z.object(itemFields).partial().extend({ version }).strict());
 export type PriceBookItemUpdateInput = z.infer<typeof priceBookItemUpdateSchema>;
 
 export const csvImportSchema = z

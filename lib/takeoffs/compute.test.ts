@@ -1,0 +1,84 @@
+import { describe, expect, it } from "vitest";
+import { cutList } from "@/takeoff";
+import { computeTakeoff, MissingItem } from "./compute";
+import { testInputs, testPrices } from "./fixtures";
+
+describe("computeTakeoff", () => {
+  it("worked example, JLC 'Production Jamb Extensions': 3 1/2 in casing with 1/4 in reveals at jamb and stool → stool 8 in longer than the jamb opening", async () => {
+    // The article's rule: twice the casing + twice the jamb reveal + twice the reveal at the stool's ends.
+    const inputs = testInputs({
+      openingTypes: [
+        { id: "w", mark: "W9", width: 30, height: 48, setback: 0, trimSpec: { style: "stool-and-apron", casingWidth: 3.5, casingThickness: 0.75, reveal: 0.25, stoolHorn: 0.25 } },
+      ],
+      counts: { perUnit: {}, commonAreas: { w: 1 }, job: { w: 1 } },
+    });
+    const result = await computeTakeoff(inputs, testPrices());
+    const pieces = result.openingTypes[0]!.cutList;
+    expect(pieces.find((p) => p.part === "stool")!.length).toBe(30 + 8);
+    // The apron's ends line up with the casing's outer edges (the same article; also Gary Katz, "Installing Traditional Stool and Apron": "the O.D. of the casing is also the O.D. of the apron").
+    expect(pieces.find((p) => p.part === "apron")!.length).toBe(30 + 2 * 0.25 + 2 * 3.5);
+  });
+
+  it("orders cover every piece of every opening, per price-book item, and extensions come from the narrowest board wide enough", async () => {
+    const inputs = testInputs();
+    const result = await computeTakeoff(inputs, testPrices());
+    for (const ot of inputs.openingTypes) {
+      const q = inputs.counts.job[ot.id]!;
+      for (const piece of cutList(ot, ot.trimSpec)) {
+        const item = result.openingTypes.find((o) => o.openingTypeId === ot.id)!.items[piece.material]!;
+        const order = result.orders.find((o) => o.itemId === item && o.material === piece.material && (o.width ?? null) === (piece.material === "extension" ? piece.width : null));
+        const cut = order!.plan.boards.flatMap((b) => Array<number[]>(b.count).fill(b.cuts)).flat().filter((c) => c === piece.length).length;
+        expect(cut).toBeGreaterThanOrEqual(piece.quantity * q);
+      }
+    }
+    const extensions = result.orders.filter((o) => o.material === "extension");
+    expect(extensions.map((o) => [o.width, o.stockWidth]).sort()).toEqual([
+      [0.5, 3.5],
+      [1.4375, 3.5],
+    ]);
+    // Aprons come from the casing when the book lists no apron of that profile (common practice).
+    expect(result.orders.find((o) => o.material === "apron")!.itemId).toBe("casing-25");
+  });
+
+  it("adds the waste allowance per stock length, rounded up, and prices the bid from what is bought", async () => {
+    const result = await computeTakeoff(testInputs(), testPrices());
+    for (const order of result.orders) {
+      for (const buy of order.toBuy) {
+        const planned = order.plan.boards.filter((b) => b.stockLength === buy.stockLength).reduce((t, b) => t + b.count, 0);
+        expect(buy.count).toBe(Math.ceil(planned * 1.1 - 1e-9));
+      }
+    }
+    const bought = result.orders.flatMap((o) => o.toBuy).reduce((t, b) => t + b.count * b.price, 0);
+    expect(result.bid.material).toBeCloseTo(bought, 2);
+    // Labour: 23 × 45 + 10 × 30 minutes plus 2 min per foot of extension.
+    const extensionFeet = result.orders.filter((o) => o.material === "extension").reduce((t, o) => t + o.linearInches, 0) / 12;
+    expect(result.labourMinutes).toBeCloseTo(23 * 45 + 10 * 30 + 2 * extensionFeet, 6);
+    expect(result.bid.total).toBeCloseTo(result.bid.material + result.bid.labour + result.bid.markup + result.bid.tax, 2);
+  });
+
+  it("totals per unit type: one unit, all units, and the job", async () => {
+    const result = await computeTakeoff(testInputs(), testPrices());
+    const a = result.unitTypes[0]!;
+    for (const t of a.perUnit) {
+      const all = a.allUnits.find((x) => x.material === t.material)!;
+      expect(all.linearInches).toBeCloseTo(t.linearInches * 10, 6);
+    }
+    const casing = (list: typeof a.perUnit) => list.find((x) => x.material === "casing")?.linearInches ?? 0;
+    expect(casing(result.job)).toBeCloseTo(casing(a.allUnits) + casing(result.commonAreas), 6);
+  });
+
+  it("an alternate casing reprices every window with that profile", async () => {
+    const base = await computeTakeoff(testInputs(), testPrices());
+    const alt = await computeTakeoff(testInputs({ casingItemId: "casing-35" }), testPrices());
+    expect(alt.orders.filter((o) => o.material === "casing").map((o) => o.itemId)).toEqual(["casing-35"]);
+    const leg = (r: typeof base) => r.openingTypes[0]!.cutList.find((p) => p.part === "casing-leg")!.length;
+    expect(leg(alt) - leg(base)).toBe(1); // 3 1/2 − 2 1/2 in wider casing, measured to the long point
+  });
+
+  it("names the window and the size when the price book lacks it", async () => {
+    const prices = testPrices();
+    prices.items = prices.items.filter((i) => i.kind !== "stool");
+    await expect(computeTakeoff(testInputs(), prices)).rejects.toThrow(MissingItem);
+    await expect(computeTakeoff(testInputs(), prices)).rejects.toThrow(/W1 needs stool at least 2 7\/16" wide/);
+  });
+});

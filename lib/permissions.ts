@@ -18,6 +18,8 @@ export const permissions = {
   // Takeoffs: estimators run them; everyone reads them.
   "takeoff.read": ["admin", "estimator", "project_manager"],
   "takeoff.run": ["admin", "estimator"],
+  // Project managers mark the submitted bid (which locks it) and send it; admins may too.
+  "takeoff.submit": ["admin", "project_manager"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;

@@ -7,6 +7,7 @@ export function NavLinks({ orgSlug }: { orgSlug: string }) {
   const path = usePathname();
   const links = [
     { href: `/${orgSlug}/projects`, label: "Projects" },
+    { href: `/${orgSlug}/price-books`, label: "Price books" },
     { href: `/${orgSlug}/members`, label: "Members" },
   ];
   return (

@@ -10,6 +10,7 @@ export function ProjectTabs({ base }: { base: string }) {
     { href: base, label: "Overview", active: path === base },
     { href: `${base}/plans`, label: "Plans", active: path.startsWith(`${base}/plans`) || path.startsWith(`${base}/sheets`) },
     { href: `${base}/openings`, label: "Window list", active: path.startsWith(`${base}/openings`) },
+    { href: `${base}/takeoffs`, label: "Takeoffs", active: path.startsWith(`${base}/takeoffs`) },
   ];
   return (
     <nav className="flex gap-1 border-b border-maple-200" aria-label="Project sections">

@@ -27,9 +27,11 @@ async function assertNameFree(tx: Tx, orgId: string, name: string, exceptId?: st
 
 export async function listPriceBooks({ orgId }: { orgId: string }): Promise<PriceBookListEntry[]> {
   return db
-    .select({ ...bookFields, itemCount: sql<number>`(select count(*)::int from ${priceBookItems} where ${priceBookItems.priceBookId} = ${priceBooks.id})` })
+    .select({ ...bookFields, itemCount: sql<number>`count(${priceBookItems.id})::int` })
     .from(priceBooks)
+    .leftJoin(priceBookItems, eq(priceBookItems.priceBookId, priceBooks.id))
     .where(eq(priceBooks.orgId, orgId))
+    .groupBy(priceBooks.id)
     .orderBy(sql`lower(${priceBooks.name})`, asc(priceBooks.id));
 }
 

@@ -35,3 +35,22 @@ export const takeoffs = pgTable(
   },
   (t) => [index("takeoffs_project_idx").on(t.projectId, t.createdAt)],
 );
+
+/** Each time a bid summary was e-mailed: to whom, by whom, when. */
+export const takeoffSends = pgTable(
+  "takeoff_sends",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orgId: uuid("org_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    takeoffId: uuid("takeoff_id")
+      .notNull()
+      .references(() => takeoffs.id, { onDelete: "cascade" }),
+    to: text("to").notNull(),
+    subject: text("subject").notNull(),
+    sentBy: uuid("sent_by").references(() => users.id, { onDelete: "set null" }),
+    sentAt: timestamp("sent_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("takeoff_sends_takeoff_idx").on(t.takeoffId, t.sentAt)],
+);

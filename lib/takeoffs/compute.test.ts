@@ -40,12 +40,15 @@ describe("computeTakeoff", () => {
     expect(result.orders.find((o) => o.material === "apron")!.itemId).toBe("casing-25");
   });
 
-  it("adds the waste allowance per stock length, rounded up, and prices the bid from what is bought", async () => {
+  it("adds the waste allowance on each item's board count, rounded up, at its longest length; prices the bid from what is bought", async () => {
     const result = await computeTakeoff(testInputs(), testPrices());
     for (const order of result.orders) {
-      for (const buy of order.toBuy) {
-        const planned = order.plan.boards.filter((b) => b.stockLength === buy.stockLength).reduce((t, b) => t + b.count, 0);
-        expect(buy.count).toBe(Math.ceil(planned * 1.1 - 1e-9));
+      const planned = order.plan.boardCount;
+      const bought = order.toBuy.reduce((t, b) => t + b.count, 0);
+      expect(bought).toBe(planned + Math.ceil(planned * 0.1 - 1e-9));
+      const longest = Math.max(...order.plan.boards.map((b) => b.stockLength));
+      for (const buy of order.toBuy.filter((b) => b.stockLength !== longest)) {
+        expect(buy.count).toBe(order.plan.boards.filter((b) => b.stockLength === buy.stockLength).reduce((t, b) => t + b.count, 0));
       }
     }
     const bought = result.orders.flatMap((o) => o.toBuy).reduce((t, b) => t + b.count * b.price, 0);

@@ -69,14 +69,7 @@ export async function computeTakeoff(inputs: TakeoffInputs, prices: TakeoffPrice
       pieces: demand.reduce((t, d) => t + d.quantity, 0),
       linearInches: demand.reduce((t, d) => t + d.length * d.quantity, 0),
       plan,
-      // Allowance per stock length, rounded up: a defect spoils a whole board, not a fraction of one.
-      toBuy: [...perLength.entries()]
-        .sort((a, b) => b[0] - a[0])
-        .map(([stockLength, count]) => ({
-          stockLength,
-          count: Math.ceil(count * (1 + inputs.settings.wastePercent / 100) - 1e-9),
-          price: g.item.stock.find((s) => s.length === stockLength)!.price,
-        })),
+      toBuy: withAllowance(perLength, inputs.settings.wastePercent, g.item),
     });
   }
 
@@ -105,4 +98,20 @@ export async function computeTakeoff(inputs: TakeoffInputs, prices: TakeoffPrice
     labourMinutes: lines.length ? labourMinutes(lines, prices.labour) : 0,
     bid: bidTotal({ material: materialCost, labour }, { markup: prices.markup, taxRate: prices.taxRate, taxLabour: prices.taxLabour }),
   };
+}
+
+/**
+ * Boards to buy: the optimised counts plus the waste allowance, taken on the item's whole count and
+ * rounded up to whole boards, all added at the longest length planned — a long board can stand in for a
+ * short one, not the other way round (common practice).
+ */
+function withAllowance(perLength: Map<number, number>, wastePercent: number, item: PriceItemSnapshot) {
+  const lengths = [...perLength.entries()].sort((a, b) => b[0] - a[0]);
+  const total = lengths.reduce((t, [, n]) => t + n, 0);
+  const extra = Math.ceil((total * wastePercent) / 100 - 1e-9);
+  return lengths.map(([stockLength, count], i) => ({
+    stockLength,
+    count: count + (i === 0 ? extra : 0),
+    price: item.stock.find((s) => s.length === stockLength)!.price,
+  }));
 }

@@ -65,7 +65,7 @@ export const priceBookUpdateSchema = nonEmpty(z.object(bookFields).partial().ext
 export type PriceBookUpdateInput = z.infer<typeof priceBookUpdateSchema>;
 
 /** Bare numbers are inches, so "8" for an 8-foot board would mean 8 inches: nobody sells stock that short. */
-const stockLength = lengthInput("Stock length").refine((inches) => inches >= 12, {
+export const stockLength = lengthInput("Stock length").refine((inches) => inches >= 12, {
   message: `Stock length is under a foot: write feet with a ' (8' or 8 ft, not 8).`,
 });
 

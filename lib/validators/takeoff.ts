@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { optionalText, text, uuid } from "./common";
+import { email, optionalText, text, uuid } from "./common";
 
 export const runTakeoffSchema = z.object({
   name: text("Takeoff name", 80),
@@ -9,3 +9,13 @@ export const runTakeoffSchema = z.object({
   casingItemId: uuid.nullable().optional(),
 });
 export type RunTakeoffInput = z.infer<typeof runTakeoffSchema>;
+
+export const updateTakeoffSchema = z
+  .object({ name: text("Takeoff name", 80).optional(), note: optionalText("Note", 500) })
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, { message: "Nothing to change.", path: ["_"] });
+
+export const sendBidSchema = z.object({
+  to: email,
+  message: optionalText("Message", 2000),
+});

@@ -240,4 +240,21 @@ describe("editing a price book", () => {
   });
 });
 
+describe("the demo price book", () => {
+  it("is seeded once, every item valid, and survives its own export and import unchanged", async () => {
+    const { seedDemoPriceBook, DEMO_PRICE_BOOK_NAME } = await import("@/db/seed/demo-price-book");
+    const w = await makeOrg("Sorrel");
+    expect(await seedDemoPriceBook(w.org.id, w.people.admin.id)).toBe(true);
+    expect(await seedDemoPriceBook(w.org.id, w.people.admin.id)).toBe(false);
+    const cookie = await sessionCookie(w.people.admin);
+    const list = await call(booksRoute.GET, { method: "GET", path: "/x", params: { orgSlug: w.org.slug }, cookie });
+    const demo = (list.json.priceBooks as { id: string; name: string; itemCount: number; markup: number; taxRate: number }[]).find((b) => b.name === DEMO_PRICE_BOOK_NAME)!;
+    expect(demo).toMatchObject({ itemCount: 10, markup: 0.15, taxRate: 0.0825 });
+    const params = { orgSlug: w.org.slug, priceBookId: demo.id };
+    const csv = await (await csvRoute.GET(new NextRequest("http://localhost/x", { headers: { cookie } }), { params: Promise.resolve(params) })).text();
+    const preview = await call(csvRoute.POST, { method: "POST", path: "/x", params, body: { csv, mode: "replace" }, cookie });
+    expect((preview.json.preview as ImportPreview).counts).toEqual({ create: 0, update: 0, unchanged: 10, error: 0, delete: 0 });
+  });
+});
+
 type Api = Awaited<ReturnType<typeof as>>;

@@ -1,6 +1,22 @@
 import { pool } from "@/db/client";
 
-const TABLES = ["users", "organisations", "memberships", "invitations", "projects", "price_books", "price_book_items", "price_book_changes"] as const;
+const TABLES = [
+  "users",
+  "organisations",
+  "memberships",
+  "invitations",
+  "projects",
+  "unit_types",
+  "plan_sets",
+  "sheets",
+  "opening_types",
+  "tags",
+  "price_books",
+  "price_book_items",
+  "price_book_changes",
+  "takeoffs",
+  "takeoff_sends",
+] as const;
 
 /** Every row of every tenant table, as text: equal snapshots mean a refused request changed nothing. */
 export async function snapshot(): Promise<string> {

@@ -1,9 +1,11 @@
-// GET /api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId] — one saved takeoff with its inputs, prices and result
+// GET /api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId] — one saved takeoff; PATCH — rename (drafts only); DELETE — drafts only
 import { NextResponse } from "next/server";
 import { getTakeoff } from "@/db/queries/takeoffs";
+import { deleteTakeoff, updateTakeoff } from "@/db/queries/takeoff-lifecycle";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
-import { parseId } from "@/lib/api/read-input";
+import { parseId, readJson } from "@/lib/api/read-input";
+import { updateTakeoffSchema } from "@/lib/validators/takeoff";
 
 type Params = { orgSlug: string; projectId: string; takeoffId: string };
 
@@ -11,4 +13,21 @@ export const GET = withOrg<Params>(
   async ({ params, org }) =>
     NextResponse.json({ takeoff: await getTakeoff(projectScope(org, params), parseId(params.takeoffId, "takeoff")) }),
   { permission: "takeoff.read" },
+);
+
+export const PATCH = withOrg<Params>(
+  async ({ req, params, org }) => {
+    const id = parseId(params.takeoffId, "takeoff");
+    const input = await readJson(req, updateTakeoffSchema);
+    return NextResponse.json({ takeoff: await updateTakeoff(projectScope(org, params), id, input) });
+  },
+  { permission: "takeoff.run" },
+);
+
+export const DELETE = withOrg<Params>(
+  async ({ params, org }) => {
+    await deleteTakeoff(projectScope(org, params), parseId(params.takeoffId, "takeoff"));
+    return new NextResponse(null, { status: 204 });
+  },
+  { permission: "takeoff.run" },
 );

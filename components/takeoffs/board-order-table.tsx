@@ -1,0 +1,73 @@
+import { Fragment } from "react";
+import { count, feet, inchesText, stockLength, usd } from "@/lib/takeoffs/format";
+import { MATERIAL_LABELS } from "@/lib/takeoffs/labels";
+import type { BoardOrder } from "@/lib/takeoffs/types";
+
+const TH = "px-2 py-1.5 font-semibold";
+const TD = "num whitespace-nowrap px-2 py-1";
+
+const planned = (o: BoardOrder, length: number) => o.plan.boards.filter((b) => b.stockLength === length).reduce((t, b) => t + b.count, 0);
+
+/** What to buy: per price-book item (and rip width), boards per stock length with the allowance, at the snapshot's prices. */
+export function BoardOrderTable({ orders }: { orders: BoardOrder[] }) {
+  const total = orders.reduce((t, o) => t + o.toBuy.reduce((s, b) => s + b.count * b.price, 0), 0);
+  const boards = orders.reduce((t, o) => t + o.toBuy.reduce((s, b) => s + b.count, 0), 0);
+  return (
+    <div className="relative overflow-x-auto rounded-lg border border-maple-200 bg-white">
+      <table className="w-full border-collapse text-sm">
+        <caption className="sr-only">Board order: boards to buy per item and stock length</caption>
+        <thead className="bg-maple-100 text-left text-graphite-700">
+          <tr>
+            <th scope="col" className={TH}>Item</th>
+            <th scope="col" className={TH}>Supplier code</th>
+            <th scope="col" className={`${TH} text-right`}>Stock length</th>
+            <th scope="col" className={`${TH} text-right`}>Optimised</th>
+            <th scope="col" className={`${TH} text-right`}>To buy</th>
+            <th scope="col" className={`${TH} text-right`}>Each</th>
+            <th scope="col" className={`${TH} text-right`}>Amount</th>
+          </tr>
+        </thead>
+        <tbody>
+          {orders.map((o) => (
+            <Fragment key={`${o.itemId}|${o.material}|${o.width ?? ""}`}>
+              {o.toBuy.map((b, i) => (
+                <tr key={b.stockLength} className={i === 0 ? "border-t border-maple-200 align-top" : "align-top"}>
+                  {i === 0 && (
+                    <th scope="rowgroup" rowSpan={o.toBuy.length} className="px-2 py-1 text-left font-medium">
+                      {o.itemName}
+                      <span className="block text-xs font-normal text-graphite-600">
+                        {MATERIAL_LABELS[o.material]}
+                        {o.width !== undefined && ` ripped to ${inchesText(o.width)}${o.stockWidth ? ` from ${inchesText(o.stockWidth)} board` : ""}`} ·{" "}
+                        {count(o.pieces)} pieces, {feet(o.linearInches / 12)} ft
+                      </span>
+                    </th>
+                  )}
+                  {i === 0 && (
+                    <td rowSpan={o.toBuy.length} className="px-2 py-1 text-graphite-700">
+                      {o.supplierCode ?? "—"}
+                    </td>
+                  )}
+                  <td className={TD}>{stockLength(b.stockLength)}</td>
+                  <td className={TD}>{count(planned(o, b.stockLength))}</td>
+                  <td className={`${TD} font-semibold`}>{count(b.count)}</td>
+                  <td className={TD}>{usd(b.price)}</td>
+                  <td className={TD}>{usd(b.count * b.price)}</td>
+                </tr>
+              ))}
+            </Fragment>
+          ))}
+        </tbody>
+        <tfoot>
+          <tr className="border-t-2 border-maple-300 bg-maple-50">
+            <th scope="row" colSpan={4} className="px-2 py-1.5 text-left font-semibold">
+              Boards to buy, waste allowance included
+            </th>
+            <td className={`${TD} font-semibold`}>{count(boards)}</td>
+            <td />
+            <td className={`${TD} font-semibold`}>{usd(total)}</td>
+          </tr>
+        </tfoot>
+      </table>
+    </div>
+  );
+}

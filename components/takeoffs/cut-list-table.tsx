@@ -1,0 +1,45 @@
+import { count, inchesText, tapeLength } from "@/lib/takeoffs/format";
+import { PART_LABELS } from "@/lib/takeoffs/labels";
+import type { OpeningTypeResult } from "@/lib/takeoffs/types";
+import { EndsCell } from "./end-glyph";
+
+const TH = "px-1.5 py-1.5 font-semibold";
+
+/** The pieces one opening type needs, as the crew cuts them: lengths to 1/16 in, miters to the long point. */
+export function CutListTable({ ot, itemName }: { ot: OpeningTypeResult; itemName: (id: string | undefined) => string }) {
+  return (
+    <div className="relative overflow-x-auto rounded-md border border-maple-200">
+      <table className="w-full border-collapse text-sm">
+        <caption className="sr-only">Cut list for {ot.mark}</caption>
+        <thead className="bg-maple-100 text-left text-graphite-700">
+          <tr>
+            <th scope="col" className={TH}>Part</th>
+            <th scope="col" className={`${TH} text-right`}>Per window</th>
+            <th scope="col" className={`${TH} text-right`}>In job</th>
+            <th scope="col" className={`${TH} text-right`}>Length</th>
+            <th scope="col" className={`${TH} text-right`}>Width</th>
+            <th scope="col" className={TH}>Ends</th>
+            <th scope="col" className={TH}>Cut from</th>
+          </tr>
+        </thead>
+        <tbody>
+          {ot.cutList.map((p) => (
+            <tr key={p.part} className="border-t border-maple-100 align-top">
+              <th scope="row" className="whitespace-nowrap px-1.5 py-1 text-left font-medium">
+                {PART_LABELS[p.part]}
+              </th>
+              <td className="num px-1.5 py-1">{count(p.quantity)}</td>
+              <td className="num px-1.5 py-1">{count(p.quantity * ot.quantity)}</td>
+              <td className="num whitespace-nowrap px-1.5 py-1 font-semibold">{tapeLength(p.length)}</td>
+              <td className="num whitespace-nowrap px-1.5 py-1">{p.width === undefined ? "—" : inchesText(p.width)}</td>
+              <td className="px-1.5 py-1 text-xs">
+                <EndsCell ends={p.ends} />
+              </td>
+              <td className="px-1.5 py-1 text-xs text-graphite-700">{itemName(ot.items[p.material])}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,45 @@
+import { elevation } from "@/lib/takeoffs/elevation";
+import { count, inchesText, tapeLength } from "@/lib/takeoffs/format";
+import { STYLE_NAMES } from "@/lib/takeoffs/labels";
+import type { OpeningTypeResult, PriceItemSnapshot } from "@/lib/takeoffs/types";
+import { CutListTable } from "./cut-list-table";
+import { ElevationDrawing } from "./elevation-drawing";
+
+export const CUT_CAUTION =
+  "Before cutting: eye and hearing protection on, blade guards in place, hands clear of the blade path, and read each tool's manual. " +
+  "Check every length against the opening on site; local building codes and licensed practice govern.";
+
+/** One line of the window list as built: its size and spec, the cut list and the drawing side by side. */
+export function OpeningTypeSection({ ot, items }: { ot: OpeningTypeResult; items: PriceItemSnapshot[] }) {
+  const itemName = (id: string | undefined) => items.find((i) => i.id === id)?.name ?? "—";
+  const { width, height, setback } = ot.opening;
+  const drawing = elevation(ot, items);
+  return (
+    <section className="break-inside-avoid rounded-lg border border-maple-200 bg-white p-4 shadow-sm print:shadow-none" aria-labelledby={`ot-${ot.openingTypeId}`}>
+      <header className="mb-3 flex flex-wrap items-baseline gap-x-4 gap-y-1">
+        <h3 id={`ot-${ot.openingTypeId}`} className="text-lg font-bold text-graphite-900">
+          {ot.mark}
+        </h3>
+        <p className="text-sm text-graphite-700">
+          <span className="num">{tapeLength(width)}</span> × <span className="num">{tapeLength(height)}</span> jamb to jamb · setback{" "}
+          {inchesText(setback)} · {STYLE_NAMES[ot.spec.style]} · casing {inchesText(ot.spec.casingWidth)} × {inchesText(ot.spec.casingThickness)}
+        </p>
+        <p className="ml-auto text-sm">
+          <span className="num font-semibold">{count(ot.quantity)}</span> in the job
+        </p>
+      </header>
+      {ot.quantity === 0 && <p className="mb-2 text-xs text-graphite-600">Not tagged on any sheet: listed for reference, not ordered or priced.</p>}
+      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_22rem] print:grid-cols-[minmax(0,1fr)_15rem]">
+        <CutListTable ot={ot} itemName={itemName} />
+        <figure className="rounded-md border border-maple-200 bg-maple-50 p-2">
+          <ElevationDrawing e={drawing} title={`Elevation of ${ot.mark} from the room, drawn to scale from the cut list.`} />
+          <figcaption className="mt-1 text-xs text-graphite-600">Seen from the room. Dashed: jamb extensions behind the casing.</figcaption>
+        </figure>
+      </div>
+      <p className="mt-3 border-l-4 border-brass-400 pl-2 text-xs text-graphite-700">
+        <strong className="font-semibold">Safety. </strong>
+        {CUT_CAUTION}
+      </p>
+    </section>
+  );
+}

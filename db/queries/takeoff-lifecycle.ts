@@ -1,0 +1,74 @@
+import { and, eq } from "drizzle-orm";
+import { db } from "../client";
+import { projects, takeoffs } from "../schema";
+import { conflict, notFound } from "@/lib/errors";
+import { getTakeoff } from "./takeoffs";
+import type { ProjectScope } from "./project-scope";
+
+const scoped = (s: ProjectScope, id: string) =>
+  and(eq(takeoffs.orgId, s.orgId), eq(takeoffs.projectId, s.projectId), eq(takeoffs.id, id));
+
+const locked = () => conflict("This takeoff was submitted as the bid and is locked. Make a copy to continue working on it.");
+
+/** Rename or re-note a draft. A submitted takeoff refuses every edit, whoever asks. */
+export async function updateTakeoff(s: ProjectScope, id: string, input: { name?: string; note?: string | null }) {
+  const current = await getTakeoff(s, id);
+  if (current.status === "submitted") throw locked();
+  const rows = await db
+    .update(takeoffs)
+    .set(input)
+    .where(and(scoped(s, id), eq(takeoffs.status, "draft")))
+    .returning({ id: takeoffs.id });
+  if (rows.length === 0) throw locked(); // submitted between the read and the write
+  return getTakeoff(s, id);
+}
+
+export async function deleteTakeoff(s: ProjectScope, id: string) {
+  const current = await getTakeoff(s, id);
+  if (current.status === "submitted") throw locked();
+  const rows = await db.delete(takeoffs).where(and(scoped(s, id), eq(takeoffs.status, "draft"))).returning({ id: takeoffs.id });
+  if (rows.length === 0) throw locked();
+}
+
+/**
+ * Marks the takeoff as the submitted bid: it is locked from then on, and the project's status says
+ * "submitted" (a project that was already won or lost keeps that status).
+ */
+export async function submitTakeoff(s: ProjectScope & { userId: string }, id: string) {
+  await db.transaction(async (tx) => {
+    const rows = await tx
+      .update(takeoffs)
+      .set({ status: "submitted", submittedAt: new Date(), submittedBy: s.userId })
+      .where(and(scoped(s, id), eq(takeoffs.status, "draft")))
+      .returning({ id: takeoffs.id });
+    if (rows.length === 0) {
+      const [exists] = await tx.select({ id: takeoffs.id }).from(takeoffs).where(scoped(s, id));
+      throw exists ? conflict("This takeoff is already the submitted bid.") : notFound("No such takeoff.");
+    }
+    await tx
+      .update(projects)
+      .set({ status: "submitted", updatedAt: new Date() })
+      .where(and(eq(projects.orgId, s.orgId), eq(projects.id, s.projectId), eq(projects.status, "draft")));
+  });
+  return getTakeoff(s, id);
+}
+
+/** A draft copy of any takeoff (submitted or not) with the same snapshots, to continue from. */
+export async function copyTakeoff(s: ProjectScope & { userId: string }, id: string) {
+  const source = await getTakeoff(s, id);
+  const [row] = await db
+    .insert(takeoffs)
+    .values({
+      orgId: s.orgId,
+      projectId: s.projectId,
+      name: `Copy of ${source.name}`.slice(0, 80),
+      note: source.note,
+      priceBookId: null,
+      inputs: source.inputs,
+      prices: source.prices,
+      result: source.result,
+      createdBy: s.userId,
+    })
+    .returning({ id: takeoffs.id });
+  return getTakeoff(s, row!.id);
+}

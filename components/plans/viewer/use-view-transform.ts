@@ -29,14 +29,16 @@ export function useViewTransform(page: Size | null) {
   const live = useRef<{ view: View | null; box: Size | null; page: Size | null }>({ view: null, box: null, page: null });
   live.current = { view, box, page };
 
-  const setView = useCallback((next: View | ((v: View) => View)) => {
+  // A stream of changes (drag, wheel, pinch) waits to settle; a single step (a key, a button) renders at once.
+  const setView = useCallback((next: View | ((v: View) => View), opts: { settleNow?: boolean } = {}) => {
     const { view: cur, box: b, page: p } = live.current;
     if (!cur || !b || !p) return;
     const v = clampPan(typeof next === "function" ? next(cur) : next, p, b);
     live.current.view = v;
     setViewState(v);
     if (timer.current) clearTimeout(timer.current);
-    timer.current = setTimeout(() => setSettled(live.current.view), SETTLE_MS);
+    if (opts.settleNow) setSettled(v);
+    else timer.current = setTimeout(() => setSettled(live.current.view), SETTLE_MS);
   }, []);
 
   useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);
@@ -70,7 +72,8 @@ export function useViewTransform(page: Size | null) {
     (factor: number, anchor?: { x: number; y: number }) => {
       const { box: b, page: p } = live.current;
       if (!b || !p) return;
-      setView((v) => zoomAt(v, factor, anchor ?? { x: b.width / 2, y: b.height / 2 }, p, b));
+      // Wheel zoom passes its pointer as the anchor and comes in streams; buttons and keys are single steps.
+      setView((v) => zoomAt(v, factor, anchor ?? { x: b.width / 2, y: b.height / 2 }, p, b), { settleNow: !anchor });
     },
     [setView],
   );
@@ -79,7 +82,7 @@ export function useViewTransform(page: Size | null) {
     (how: "width" | "page" | "actual") => {
       const { box: b, page: p } = live.current;
       if (!b || !p) return;
-      setView((v) => (how === "width" ? fitWidth(p, b) : how === "page" ? fitPage(p, b) : zoomCentered(v, ACTUAL_SIZE_ZOOM, p, b)));
+      setView((v) => (how === "width" ? fitWidth(p, b) : how === "page" ? fitPage(p, b) : zoomCentered(v, ACTUAL_SIZE_ZOOM, p, b)), { settleNow: true });
     },
     [setView],
   );

@@ -1,0 +1,67 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import type { ReactNode } from "react";
+import { BidSummary } from "@/components/takeoffs/bid-summary";
+import { BoardOrderTable } from "@/components/takeoffs/board-order-table";
+import { CostChart } from "@/components/takeoffs/cost-chart";
+import { JobMaterials } from "@/components/takeoffs/job-materials";
+import { OpeningTypeSection } from "@/components/takeoffs/opening-type-section";
+import { PrintSheet } from "@/components/takeoffs/print-sheet";
+import { TakeoffHeader } from "@/components/takeoffs/takeoff-header";
+import { UnitTypeTotals } from "@/components/takeoffs/unit-type-totals";
+import { api } from "@/lib/api-client";
+import { takeoffsApi, takeoffsPage, type TakeoffDetail } from "@/lib/takeoffs/view";
+
+function Part({ id, title, intro, children }: { id: string; title: string; intro?: string; children: ReactNode }) {
+  return (
+    <section aria-labelledby={id} className="space-y-3">
+      <div>
+        <h2 id={id} className="text-xl font-bold text-graphite-900">
+          {title}
+        </h2>
+        {intro && <p className="text-sm text-graphite-700">{intro}</p>}
+      </div>
+      {children}
+    </section>
+  );
+}
+
+/** A saved takeoff, read-only: per opening type, per unit type, then the job's order and bid. */
+export function TakeoffResultView({ orgSlug, projectId, initial }: { orgSlug: string; projectId: string; initial: TakeoffDetail }) {
+  // Figures never change once saved; the query only keeps the status (draft or submitted) current.
+  const { data } = useQuery({
+    queryKey: ["takeoff", orgSlug, projectId, initial.id],
+    queryFn: () => api<{ takeoff: TakeoffDetail }>(`${takeoffsApi(orgSlug, projectId)}/${initial.id}`),
+    initialData: { takeoff: initial },
+    staleTime: 60_000,
+  });
+  const t = data.takeoff;
+  const { result, prices } = t;
+  return (
+    <div className="space-y-8">
+      <PrintSheet />
+      <TakeoffHeader t={t} listHref={takeoffsPage(orgSlug, projectId)} />
+      <Part id="per-opening" title="Per opening type" intro="What each window gets, as the crew cuts it.">
+        <div className="space-y-4">
+          {result.openingTypes.map((ot) => (
+            <OpeningTypeSection key={ot.openingTypeId} ot={ot} items={prices.items} />
+          ))}
+        </div>
+      </Part>
+      <Part id="per-unit" title="Per unit type" intro="Cut lengths per material, before boards and waste.">
+        <UnitTypeTotals result={result} />
+      </Part>
+      <Part id="per-job" title="Job totals" intro="Materials for the whole job, the boards to order and the bid.">
+        <JobMaterials result={result} />
+        <h3 className="pt-2 text-lg font-semibold">Board order</h3>
+        <BoardOrderTable orders={result.orders} />
+        <h3 className="pt-2 text-lg font-semibold">Bid</h3>
+        <div className="grid gap-6 rounded-lg border border-maple-200 bg-white p-4 lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)] print:block">
+          <BidSummary result={result} prices={prices} />
+          <CostChart result={result} />
+        </div>
+      </Part>
+    </div>
+  );
+}

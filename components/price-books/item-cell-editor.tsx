@@ -33,6 +33,8 @@ export function ItemCellEditor({ row, column }: { row: PriceBookItemView; column
   const cancelled = useRef(false);
   const id = `edit-${row.id}-${column}`;
   const isPrice = priceColumnLength(column) !== null;
+  // Numbers sit at the right of their cells; their messages open leftwards so they stay on the page.
+  const numeric = isPrice || column === "faceWidth" || column === "thickness";
 
   async function save(e?: FormEvent) {
     e?.preventDefault();
@@ -73,7 +75,7 @@ export function ItemCellEditor({ row, column }: { row: PriceBookItemView; column
           aria-describedby={invalid ? `${id}-error` : undefined}
           autoFocus
           onFocus={(e) => e.currentTarget.select()}
-          className={`${input} ${isPrice || column === "faceWidth" || column === "thickness" ? "num" : ""}`}
+          className={`${input} ${numeric ? "num" : ""}`}
           value={text}
           placeholder={isPrice ? "not sold" : PLACEHOLDERS[column]}
           onChange={(e) => setText(e.target.value)}
@@ -90,7 +92,7 @@ export function ItemCellEditor({ row, column }: { row: PriceBookItemView; column
         <div
           id={`${id}-error`}
           role="alert"
-          className="absolute left-0 top-full z-20 mt-1 w-64 rounded-md border border-alarm-600 bg-white px-2 py-1.5 text-left text-xs font-medium text-alarm-700 shadow-md"
+          className={`absolute top-full z-20 mt-1 w-64 whitespace-normal rounded-md border border-alarm-600 bg-white px-2 py-1.5 text-left text-xs font-medium text-alarm-700 shadow-md ${numeric ? "right-0" : "left-0"}`}
         >
           {errors.map((m) => (
             <p key={m}>⚠ {m}</p>

@@ -64,7 +64,7 @@ export function buildColumns(lengths: number[]) {
     size("faceWidth"),
     size("thickness"),
     text("species", "min-w-28"),
-    text("supplierCode", ""),
+    text("supplierCode", "whitespace-nowrap"),
     ...lengths.map((inches) =>
       helper.accessor((r) => r.stock.find((s) => sameLength(s.length, inches))?.price ?? -1, {
         id: priceColumnId(inches),

@@ -114,7 +114,47 @@ describe("documents out", () => {
   });
 });
 
-async function fetchRaw(handler: (req: import("next/server").NextRequest, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>, cookie?: string) {
+// Route handlers differ in their params type; this only needs to call them.
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+async function fetchRaw(handler: (req: import("next/server").NextRequest, ctx: { params: Promise<any> }) => Promise<Response>, cookie?: string) {
   const { NextRequest } = await import("next/server");
   return handler(new NextRequest("http://127.0.0.1/x", { headers: cookie ? { cookie } : {} }), { params: Promise.resolve(at()) });
 }
+
+describe("comparing takeoffs across the organisation", () => {
+  const compare = async (ids: string[], actor: Actor = "project_manager") => {
+    const { GET } = await import("@/app/api/orgs/[orgSlug]/takeoffs/compare/route");
+    return call(GET, { method: "GET", path: `/x?ids=${ids.join(",")}`, params: { orgSlug: home.org.slug }, cookie: await cookieOf(actor) });
+  };
+
+  it("puts two takeoffs side by side and says what changed", async () => {
+    const { priceBookId, items } = await addTestPriceBook(home.org.id);
+    const alt = await call(takeoffsRoute.POST, {
+      method: "POST",
+      path: "/x",
+      params: { orgSlug: home.org.slug, projectId: home.project.id },
+      body: { name: "Poplar casing", priceBookId, casingItemId: items.find((i) => i.name.includes("3 1/2"))!.id },
+      cookie: await cookieOf("estimator"),
+    });
+    const res = await compare([takeoff.id, (alt.json.takeoff as TakeoffView).id]);
+    expect(res.status).toBe(200);
+    const columns = res.json.columns as { name: string; bidTotal: number }[];
+    expect(columns.map((c) => c.name)).toEqual(["Base bid", "Poplar casing"]);
+    expect(columns[1]!.bidTotal).toBeGreaterThan(columns[0]!.bidTotal);
+    expect((res.json.differences as { reasons: string[] }[])[0]!.reasons).toContain("Alternate casing: each window's own → Casing 3 1/2 × 3/4 poplar.");
+  });
+
+  it.each([
+    ["one takeoff", () => [takeoff.id], 422],
+    ["five takeoffs", () => Array.from({ length: 5 }, (_, i) => `00000000-0000-4000-8000-00000000000${i}`), 422],
+    ["a malformed id", () => [takeoff.id, "nope"], 422],
+    ["another organisation's takeoff", () => [takeoff.id, "00000000-0000-4000-8000-000000000000"], 404],
+  ] as const)("refuses %s", async (_name, ids, status) => {
+    expect((await compare([...ids()])).status).toBe(status);
+  });
+
+  it("is refused to other organisations and to the signed out", async () => {
+    expect((await compare([takeoff.id, takeoff.id], "outsider")).status).toBe(404);
+    expect((await compare([takeoff.id, takeoff.id], "anonymous")).status).toBe(401);
+  });
+});

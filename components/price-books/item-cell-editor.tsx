@@ -1,10 +1,9 @@
 "use client";
 
 import { useRef, useState, type FocusEvent, type FormEvent, type KeyboardEvent } from "react";
-import { editText, priceColumnLength, type ItemColumn } from "@/lib/price-book/item-edit";
+import { columnLabel, editText, priceColumnLength, type ItemColumn } from "@/lib/price-book/item-edit";
 import { KIND_LABELS, MATERIAL_KINDS } from "@/lib/price-book/kinds";
 import type { PriceBookItemView } from "@/lib/price-book/types";
-import { columnLabel } from "./item-columns";
 import { useItemsControls } from "./items-context";
 
 const input = "w-full min-w-0 rounded border border-graphite-400 bg-white px-1.5 py-1 text-sm text-graphite-900 aria-[invalid=true]:border-alarm-600";

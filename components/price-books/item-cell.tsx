@@ -1,8 +1,7 @@
 "use client";
 
-import { cellText, type ItemColumn } from "@/lib/price-book/item-edit";
+import { cellText, columnLabel, type ItemColumn } from "@/lib/price-book/item-edit";
 import type { PriceBookItemView } from "@/lib/price-book/types";
-import { columnLabel } from "./item-columns";
 import { ItemCellEditor } from "./item-cell-editor";
 import { useItemsControls } from "./items-context";
 

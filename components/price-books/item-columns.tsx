@@ -14,7 +14,7 @@ import {
   sortFn_basic,
   tableFeatures,
 } from "@tanstack/react-table";
-import { COLUMN_LABELS, priceColumnId, priceColumnLength, type ItemColumn, type TextColumn } from "@/lib/price-book/item-edit";
+import { COLUMN_LABELS, priceColumnId, type ItemColumn } from "@/lib/price-book/item-edit";
 import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
 import type { PriceBookItemView } from "@/lib/price-book/types";
 import { ItemCell } from "./item-cell";
@@ -34,13 +34,6 @@ export const features = tableFeatures({
 });
 
 const helper = createColumnHelper<typeof features, PriceBookItemView>();
-
-/** The header of a column, also used to name a cell to screen readers and in messages. */
-export function columnLabel(column: string): string {
-  const inches = priceColumnLength(column);
-  if (inches !== null) return `${stockLengthText(inches)} price`;
-  return COLUMN_LABELS[column as TextColumn] ?? column;
-}
 
 const cell = (column: ItemColumn) =>
   function Cell({ row }: { row: { original: PriceBookItemView } }) {

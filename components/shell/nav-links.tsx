@@ -8,6 +8,7 @@ export function NavLinks({ orgSlug }: { orgSlug: string }) {
   const links = [
     { href: `/${orgSlug}/projects`, label: "Projects" },
     { href: `/${orgSlug}/price-books`, label: "Price books" },
+    { href: `/${orgSlug}/compare`, label: "Compare" },
     { href: `/${orgSlug}/members`, label: "Members" },
   ];
   return (

@@ -13,20 +13,25 @@ export function CutListTable({ ot, itemName }: { ot: OpeningTypeResult; itemName
         <caption className="sr-only">Cut list for {ot.mark}</caption>
         <thead className="bg-maple-100 text-left text-graphite-700">
           <tr>
-            <th scope="col" className={TH}>Part</th>
+            <th scope="col" className={TH}>
+              Part <span className="font-normal">· cut from</span>
+            </th>
             <th scope="col" className={`${TH} text-right`}>Per window</th>
             <th scope="col" className={`${TH} text-right`}>In job</th>
             <th scope="col" className={`${TH} text-right`}>Length</th>
             <th scope="col" className={`${TH} text-right`}>Width</th>
             <th scope="col" className={TH}>Ends</th>
-            <th scope="col" className={TH}>Cut from</th>
           </tr>
         </thead>
         <tbody>
           {ot.cutList.map((p) => (
             <tr key={p.part} className="border-t border-maple-100 align-top">
-              <th scope="row" className="whitespace-nowrap px-1.5 py-1 text-left font-medium">
-                {PART_LABELS[p.part]}
+              <th scope="row" className="px-1.5 py-1 text-left font-medium">
+                <span className="whitespace-nowrap">{PART_LABELS[p.part]}</span>
+                <span className="block text-xs font-normal text-graphite-600">
+                  <span className="sr-only">cut from </span>
+                  {itemName(ot.items[p.material])}
+                </span>
               </th>
               <td className="num px-1.5 py-1">{count(p.quantity)}</td>
               <td className="num px-1.5 py-1">{count(p.quantity * ot.quantity)}</td>
@@ -35,7 +40,6 @@ export function CutListTable({ ot, itemName }: { ot: OpeningTypeResult; itemName
               <td className="px-1.5 py-1 text-xs">
                 <EndsCell ends={p.ends} />
               </td>
-              <td className="px-1.5 py-1 text-xs text-graphite-700">{itemName(ot.items[p.material])}</td>
             </tr>
           ))}
         </tbody>

@@ -27,21 +27,27 @@ export function EndGlyph({ end, side = "right" }: { end: End; side?: "left" | "r
 export function EndsCell({ ends }: { ends: readonly [End, End] }) {
   if (ends[0] === ends[1]) {
     return (
-      <span className="inline-flex items-center gap-1">
-        <EndGlyph end={ends[0]} side="left" />
-        <EndGlyph end={ends[1]} />
-        {END_LABELS[ends[0]]}, both
+      <span className="inline-flex items-start gap-1">
+        <span className="flex shrink-0 gap-0.5 pt-0.5">
+          <EndGlyph end={ends[0]} side="left" />
+          <EndGlyph end={ends[1]} />
+        </span>
+        <span>{END_LABELS[ends[0]]}, both</span>
       </span>
     );
   }
   return (
     <span className="inline-flex flex-wrap items-center gap-x-1">
-      <EndGlyph end={ends[0]} side="left" />
-      {END_LABELS[ends[0]]}
+      <span className="inline-flex items-center gap-1 whitespace-nowrap">
+        <EndGlyph end={ends[0]} side="left" />
+        {END_LABELS[ends[0]]}
+      </span>
       <span aria-hidden className="text-graphite-500">/</span>
       <span className="sr-only">and</span>
-      <EndGlyph end={ends[1]} />
-      {END_LABELS[ends[1]]}
+      <span className="inline-flex items-center gap-1 whitespace-nowrap">
+        <EndGlyph end={ends[1]} />
+        {END_LABELS[ends[1]]}
+      </span>
     </span>
   );
 }

@@ -55,7 +55,9 @@ export async function updatePriceBookItem(w: PriceBookWriter, itemId: string, in
     if (current.version !== input.version) throw stale(current);
     const { version, ...set } = input;
     const before = fieldsOf(current);
-    const after = { ...before, ...set, species: set.species === undefined ? before.species : set.species, supplierCode: set.supplierCode === undefined ? before.supplierCode : set.supplierCode };
+    const after: ItemFields = { ...before, ...set, species: set.species ?? null, supplierCode: set.supplierCode ?? null };
+    if (!("species" in set)) after.species = before.species;
+    if (!("supplierCode" in set)) after.supplierCode = before.supplierCode;
     const diff = itemDiff(before, after);
     if (Object.keys(diff).length === 0) return current;
     await assertDistinct(tx, w, after, itemId);

@@ -1,5 +1,5 @@
 import { and, asc, eq, sql } from "drizzle-orm";
-import { db } from "../client";
+import { db, type Tx } from "../client";
 import { priceBookItems, priceBooks } from "../schema";
 import { conflict, stale } from "@/lib/errors";
 import { bookDiff, type BookFields } from "@/lib/price-book/diff";
@@ -7,7 +7,6 @@ import { bookSummary } from "@/lib/price-book/describe";
 import type { PriceBookListEntry, PriceBookSummary, PriceBookView } from "@/lib/price-book/types";
 import type { PriceBookCreateInput, PriceBookUpdateInput } from "@/lib/validators/price-book";
 import type { LabourRates } from "@/takeoff";
-import type { Tx } from "../client";
 import { recordChanges } from "./price-book-changes";
 import { bookFields, bookWhere, getBookSummary, listItems, lockPriceBook, type PriceBookScope } from "./price-book-scope";
 

@@ -50,13 +50,16 @@ export function planImport(current: readonly PriceBookItemView[], read: CsvRead,
   const readable = rows.filter((r) => r.item);
   const claimedBy = new Map<string, ImportRowPlan>();
   const claim = (row: ImportRowPlan, matches: PriceBookItemView[], how: string) => {
-    if (matches.length > 1) return void (row.errors._row = `${matches.length} items of this book have ${how}; remove the duplicate first.`);
     const match = matches[0];
-    if (!match) return;
-    const other = claimedBy.get(match.id);
-    if (other) return void (row.errors._row = `Matches the same item as line ${other.line} ("${match.name}").`);
-    claimedBy.set(match.id, row);
-    row.itemId = match.id;
+    const other = match && claimedBy.get(match.id);
+    if (matches.length > 1) {
+      row.errors._row = `${matches.length} items of this book have ${how}; remove the duplicate first.`;
+    } else if (match && other) {
+      row.errors._row = `Matches the same item as line ${other.line} ("${match.name}").`;
+    } else if (match) {
+      claimedBy.set(match.id, row);
+      row.itemId = match.id;
+    }
   };
 
   duplicatesWithin(readable);

@@ -2,7 +2,7 @@ import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
 import { priceBookItemUpdateSchema } from "@/lib/validators/price-book";
 import { itemDiff } from "./diff";
 import { KIND_LABELS } from "./kinds";
-import { sameLength, sizeText } from "./length-text";
+import { sameLength, sizeText, stockLengthText } from "./length-text";
 import { formatMoney, moneyText } from "./numbers";
 import type { PriceBookItemView } from "./types";
 
@@ -25,6 +25,13 @@ export const COLUMN_LABELS: Record<TextColumn | "kind", string> = {
 
 export const priceColumnId = (inches: number): `price:${number}` => `price:${inches}`;
 export const priceColumnLength = (column: string): number | null => (column.startsWith("price:") ? Number(column.slice(6)) : null);
+
+/** The header of a column, also used to name a cell to screen readers and in messages. */
+export function columnLabel(column: string): string {
+  const inches = priceColumnLength(column);
+  if (inches !== null) return `${stockLengthText(inches)} price`;
+  return COLUMN_LABELS[column as TextColumn] ?? column;
+}
 
 const priceAt = (row: PriceBookItemView, inches: number) => row.stock.find((s) => sameLength(s.length, inches));
 

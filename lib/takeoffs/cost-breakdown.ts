@@ -60,7 +60,7 @@ export function layoutBar(segments: Segment[], width: number, fontSize: number):
   return segments.map((s) => {
     const w = s.share * width;
     const amountText = usd(s.amount);
-    const inside = Math.max(textWidth(s.label, fontSize), textWidth(amountText, fontSize)) + fontSize / 2 <= w;
+    const inside = Math.max(textWidth(s.label, fontSize), textWidth(amountText, fontSize)) + fontSize <= w;
     const placed: PlacedSegment = { ...s, x, width: w, amountText, inside, side: "below", row: -1, labelX: 0 };
     x += w;
     if (inside) return placed;

@@ -1,6 +1,5 @@
 import { TRIM_DEFAULTS, type CutPiece, type Part } from "@/takeoff";
 import { placeCallouts, textWidth, type PlacedCallout } from "./elevation-callouts";
-import { tapeLength } from "./format";
 import { PART_LABELS } from "./labels";
 import type { OpeningTypeResult, PriceItemSnapshot } from "./types";
 
@@ -141,7 +140,7 @@ export function elevation(ot: OpeningTypeResult, items: PriceItemSnapshot[] = []
 
   const leftEdge = Math.min(outL, hx0, stool === undefined || frame ? outL : cx - stool / 2);
   const rightEdge = Math.max(outR, hx1, stool === undefined || frame ? outR : cx + stool / 2);
-  const unit = Math.max(rightEdge - leftEdge, foot - legTop) / 36;
+  const unit = Math.max(rightEdge - leftEdge, foot - legTop) / 30;
   const gap = 2.6 * unit;
 
   const dimensions: Dimension[] = [
@@ -159,11 +158,8 @@ export function elevation(ot: OpeningTypeResult, items: PriceItemSnapshot[] = []
   }
 
   const quantity = (part: Part) => cut.find((p) => p.part === part)?.quantity ?? 1;
-  const name = (part: Part) => {
-    const n = quantity(part);
-    const len = lengthOf(cut, part);
-    return `${PART_LABELS[part]}${n > 1 ? ` ×${n}` : ""}${len === undefined ? "" : ` · ${tapeLength(len)}`}`;
-  };
+  // Names only: the lengths are on the dimension lines and in the cut list, and short names keep the text large.
+  const name = (part: Part) => `${PART_LABELS[part]}${quantity(part) > 1 ? ` ×${quantity(part)}` : ""}`;
   const anchors: [Part, Pt][] = [
     ["casing-head", { x: hx1 - 1.5 * c, y: legTop + c / 2 }],
     ["casing-leg", { x: outR - c / 2, y: legTop + (legFoot - legTop) * 0.3 }],
@@ -178,7 +174,8 @@ export function elevation(ot: OpeningTypeResult, items: PriceItemSnapshot[] = []
     if (lengthOf(cut, "apron-return") !== undefined) anchors.push(["apron-return", { x: cx + apron / 2, y: apronTop + apronWidth * 0.75 }]);
   }
   const lineGap = 1.7 * unit;
-  const callouts = placeCallouts(anchors.map(([part, anchor]) => ({ text: name(part), anchor })), lineGap, foot);
+  // Names may run down beside the dimension lines: pinned at the drawing's foot, low leaders would cross.
+  const callouts = placeCallouts(anchors.map(([part, anchor]) => ({ text: name(part), anchor })), lineGap, Math.max(foot, below));
   const calloutX = rightEdge + 3 * unit;
   const widest = Math.max(0, ...callouts.map((co) => textWidth(co.text, unit)));
 

@@ -13,7 +13,9 @@ describe("money and figures", () => {
 
   it("reads lengths like a tape, stock in whole feet", () => {
     expect(tapeLength(62.625)).toBe(`5'-2 5/8"`);
-    expect(tapeLength(0.6875)).toBe(`0'-11/16"`.replace("0'-11/16", "0'-0 11/16"));
+    expect(tapeLength(0.6875)).toBe(`11/16"`);
+    expect(tapeLength(11.99)).toBe(`1'-0"`);
+    expect(tapeLength(7.5)).toBe(`7 1/2"`);
     expect(stockLength(144)).toBe("12'");
     expect(stockLength(100)).toBe(`8'-4"`);
   });

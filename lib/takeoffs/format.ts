@@ -10,8 +10,8 @@ export function usd(amount: number): string {
   return dollars.format(cents === 0 ? 0 : cents / 100);
 }
 
-/** A cut length as read off a tape: 5'-2 5/8". */
-export const tapeLength = (inches: number) => formatLength(inches, { style: "feet-inches" });
+/** A cut length as read off a tape: 5'-2 5/8"; under a foot in inches alone (11/16", 7 1/2"), as a crew says it. */
+export const tapeLength = (inches: number) => formatLength(inches, { style: inches < 12 - 1 / 32 ? "inches" : "feet-inches" });
 
 /** A width or thickness, which nobody reads in feet: 2 1/2". */
 export const inchesText = (inches: number) => formatLength(inches);

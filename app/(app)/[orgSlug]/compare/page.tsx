@@ -1,0 +1,43 @@
+import type { Metadata } from "next";
+import { getTakeoffsToCompare, listOrganisationTakeoffs } from "@/db/queries/takeoff-compare";
+import { requireOrg } from "@/lib/auth/page-context";
+import { toAppError } from "@/lib/errors";
+import { column, explainDifferences } from "@/lib/takeoffs/compare";
+import { Card, Notice } from "@/components/ui/card";
+import { ComparisonTable } from "@/components/compare/comparison-table";
+import { TakeoffPicker } from "@/components/compare/takeoff-picker";
+
+export const metadata: Metadata = { title: "Compare takeoffs" };
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export default async function ComparePage({ params, searchParams }: { params: Promise<{ orgSlug: string }>; searchParams: Promise<{ ids?: string | string[] }> }) {
+  const { orgSlug } = await params;
+  const { org } = await requireOrg(orgSlug);
+  const raw = (await searchParams).ids;
+  const ids = [...new Set((Array.isArray(raw) ? raw : raw ? raw.split(",") : []).filter((id) => UUID.test(id)))];
+  const all = await listOrganisationTakeoffs(org.orgId);
+
+  let comparison: { columns: ReturnType<typeof column>[]; reasons: string[][] } | null = null;
+  let problem: string | null = null;
+  if (ids.length > 4) problem = "Pick at most four takeoffs.";
+  else if (ids.length >= 2) {
+    try {
+      const list = await getTakeoffsToCompare(org.orgId, ids);
+      comparison = { columns: list.map(column), reasons: list.map((t, i) => (i === 0 ? [] : explainDifferences(list[0]!, t))) };
+    } catch (error) {
+      problem = toAppError(error)?.message ?? "Those takeoffs could not be compared.";
+    }
+  }
+
+  return (
+    <div className="space-y-6">
+      <h1 className="text-2xl font-bold">Compare takeoffs</h1>
+      {problem && <Notice tone="error">{problem}</Notice>}
+      {comparison && <ComparisonTable columns={comparison.columns} reasons={comparison.reasons} />}
+      <Card title="Pick two to four takeoffs">
+        <TakeoffPicker takeoffs={all.map((t) => ({ ...t, createdAt: t.createdAt.toISOString() }))} selected={ids} />
+      </Card>
+    </div>
+  );
+}

@@ -1,4 +1,4 @@
-// The plans benchmark (run through scripts/bench-plans.sh): first render and zoom steps of a dense
+// The plans benchmark (npm run bench:plans, through scripts/bench-serve.sh): first render and zoom steps of a dense
 // ARCH D sheet, and upload-to-ready of a 50-page set, all in headless Chromium against `next start`.
 import { chromium, type Page } from "@playwright/test";
 import { encode } from "next-auth/jwt";

@@ -64,25 +64,28 @@ export function CostChart({ result }: { result: TakeoffResult }) {
           })}
         </svg>
       </div>
-      <table className="sr-only">
-        <caption>Where the bid goes</caption>
-        <thead>
-          <tr>
-            <th scope="col">Part</th>
-            <th scope="col">Amount</th>
-            <th scope="col">Share of bid</th>
-          </tr>
-        </thead>
-        <tbody>
-          {parts.map((p) => (
-            <tr key={p.key}>
-              <th scope="row">{p.label}</th>
-              <td>{usd(p.amount)}</td>
-              <td>{ratioPercent(p.share)}</td>
+      {/* A table ignores the clipping sr-only relies on; its wrapper does not. */}
+      <div className="sr-only">
+        <table>
+          <caption>Where the bid goes</caption>
+          <thead>
+            <tr>
+              <th scope="col">Part</th>
+              <th scope="col">Amount</th>
+              <th scope="col">Share of bid</th>
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {parts.map((p) => (
+              <tr key={p.key}>
+                <th scope="row">{p.label}</th>
+                <td>{usd(p.amount)}</td>
+                <td>{ratioPercent(p.share)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
     </figure>
   );
 }

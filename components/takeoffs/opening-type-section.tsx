@@ -29,9 +29,9 @@ export function OpeningTypeSection({ ot, items }: { ot: OpeningTypeResult; items
         </p>
       </header>
       {ot.quantity === 0 && <p className="mb-2 text-xs text-graphite-600">Not tagged on any sheet: listed for reference, not ordered or priced.</p>}
-      <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_30rem] print:grid-cols-[minmax(0,1fr)_3.6in]">
+      <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_30rem] print:grid-cols-1">
         <CutListTable ot={ot} itemName={itemName} />
-        <figure className="max-w-xl rounded-md border border-maple-200 bg-maple-50 p-2">
+        <figure className="max-w-xl rounded-md print:max-w-[3.4in] border border-maple-200 bg-maple-50 p-2">
           <ElevationDrawing e={drawing} title={`Elevation of ${ot.mark} from the room, drawn to scale from the cut list.`} />
           <figcaption className="mt-1 text-xs text-graphite-600">Seen from the room. Dashed: jamb extensions behind the casing.</figcaption>
         </figure>

@@ -6,6 +6,7 @@ const CSS = `
 @media print {
   @page { size: letter; margin: 0.5in; }
   html, body { background: #fff !important; }
+  body, .min-h-screen { min-height: 0 !important; }
   body > * > header, nav[aria-label="Project sections"], main a[href$="/projects"] { display: none !important; }
   main { max-width: none !important; padding: 0 !important; }
   table { font-size: 9pt; page-break-inside: auto; }

@@ -35,7 +35,7 @@ function Rows({ one, all }: { one: MaterialTotal[] | null; all: MaterialTotal[] 
 /** Pieces and linear feet per material: for one unit of each type, for all units of it, and for common areas. */
 export function UnitTypeTotals({ result }: { result: TakeoffResult }) {
   return (
-    <div className="relative overflow-x-auto rounded-lg border border-maple-200 bg-white">
+    <div className="relative max-w-3xl overflow-x-auto rounded-lg border border-maple-200 bg-white">
       <table className="w-full border-collapse text-sm">
         <caption className="sr-only">Pieces and linear feet per material, per unit type and for common areas</caption>
         <thead className="bg-maple-100 text-graphite-700">

@@ -1,0 +1,78 @@
+"use client";
+
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { Button } from "@/components/ui/button";
+import { Card, Notice } from "@/components/ui/card";
+import { api } from "@/lib/api-client";
+import { SendBidForm } from "./send-bid-form";
+
+interface Props {
+  orgSlug: string;
+  projectId: string;
+  takeoffId: string;
+  status: "draft" | "submitted";
+  canSubmit: boolean;
+  canRun: boolean;
+}
+
+type Send = { to: string; subject: string; sentAt: string; sentByName: string | null };
+
+/** What can be done with a saved takeoff: documents out, marking it as the bid (which locks it), sending, copying. */
+export function TakeoffActions({ orgSlug, projectId, takeoffId, status, canSubmit, canRun }: Props) {
+  const base = `/api/orgs/${orgSlug}/projects/${projectId}/takeoffs/${takeoffId}`;
+  const router = useRouter();
+  const queryClient = useQueryClient();
+  const sends = useQuery({ queryKey: ["takeoff-sends", takeoffId], queryFn: () => api<{ sends: Send[] }>(`${base}/sends`) });
+  const submit = useMutation({ mutationFn: () => api(`${base}/submit`, { method: "POST" }), onSuccess: () => router.refresh() });
+  const copy = useMutation({
+    mutationFn: () => api<{ takeoff: { id: string } }>(`${base}/copy`, { method: "POST" }),
+    onSuccess: ({ takeoff }) => router.push(`/${orgSlug}/projects/${projectId}/takeoffs/${takeoff.id}`),
+  });
+  const error = submit.error ?? copy.error;
+
+  return (
+    <Card title="Bid documents" actions={status === "submitted" ? <span className="text-sm font-semibold text-brass-700">🔒 Submitted bid — locked</span> : null}>
+      <div className="space-y-4 print:hidden">
+        {error && <Notice tone="error">{error.message}</Notice>}
+        <div className="flex flex-wrap gap-2">
+          <a className="rounded-md border border-graphite-400 bg-white px-3 py-2 text-sm font-semibold hover:bg-maple-100" href={`${base}/order-csv`} download>
+            Material order (CSV)
+          </a>
+          <a className="rounded-md border border-graphite-400 bg-white px-3 py-2 text-sm font-semibold hover:bg-maple-100" href={`${base}/bid-pdf`} download>
+            Bid summary (PDF)
+          </a>
+          {canSubmit && status === "draft" && (
+            <Button
+              look="primary"
+              disabled={submit.isPending}
+              onClick={() => {
+                if (confirm("Mark this takeoff as the submitted bid? It will be locked for everyone; a copy can be made to continue.")) submit.mutate();
+              }}
+            >
+              Mark as submitted bid
+            </Button>
+          )}
+          {canRun && (
+            <Button look="secondary" disabled={copy.isPending} onClick={() => copy.mutate()}>
+              Make a copy to continue
+            </Button>
+          )}
+        </div>
+        {canSubmit && <SendBidForm url={`${base}/sends`} onSent={() => queryClient.invalidateQueries({ queryKey: ["takeoff-sends", takeoffId] })} />}
+        {sends.data && sends.data.sends.length > 0 && (
+          <div>
+            <h3 className="text-sm font-semibold">Sent</h3>
+            <ul className="mt-1 space-y-0.5 text-sm" aria-label="Bid e-mails sent">
+              {sends.data.sends.map((s) => (
+                <li key={`${s.to}-${s.sentAt}`}>
+                  ✉ {s.to} · {new Date(s.sentAt).toLocaleString("en-US")} {s.sentByName ? `· by ${s.sentByName}` : ""}
+                </li>
+              ))}
+            </ul>
+          </div>
+        )}
+      </div>
+    </Card>
+  );
+}

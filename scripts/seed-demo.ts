@@ -5,6 +5,8 @@ import { memberships, organisations, projects, users } from "@/db/schema";
 import { getUserByEmail, uniqueOrgSlug } from "@/db/queries/users";
 import { hashPassword } from "@/lib/auth/password";
 import { seedDemoPlans } from "@/db/seed/demo-plans";
+import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
+import { seedDemoTakeoffs } from "@/db/seed/demo-takeoffs";
 import { DEMO_PASSWORD, demoOrgs, demoPeople, roleOfLogin } from "@/db/seed/demo-data";
 
 if (process.argv.includes("--list")) {
@@ -44,6 +46,10 @@ for (const o of demoOrgs) {
 }
 const birchmoor = demoOrgs[0]!;
 const [org] = await db.select({ id: organisations.id }).from(organisations).where(eq(organisations.name, birchmoor.name));
-const plans = await seedDemoPlans(org!.id, birchmoor.projects[0]!.name, ids.get(birchmoor.owner)!);
-console.log(created || plans ? `seeded ${created} organisation(s)${plans ? " and the demo plan set" : ""}` : "demo data already present");
+const owner = ids.get(birchmoor.owner)!;
+const plans = await seedDemoPlans(org!.id, birchmoor.projects[0]!.name, owner);
+const prices = await seedDemoPriceBook(org!.id, owner);
+const takeoffs = await seedDemoTakeoffs(org!.id, birchmoor.projects[0]!.name, ids.get("estimator")!);
+const added = [plans && "the demo plan set", prices && "a price book", takeoffs && "two takeoffs"].filter(Boolean);
+console.log(created || added.length ? `seeded ${created} organisation(s)${added.length ? `, ${added.join(", ")}` : ""}` : "demo data already present");
 await pool.end();

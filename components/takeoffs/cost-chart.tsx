@@ -2,24 +2,24 @@ import { costBreakdown, layoutBar, type SegmentKey } from "@/lib/takeoffs/cost-b
 import { ratioPercent, usd } from "@/lib/takeoffs/format";
 import type { TakeoffResult } from "@/lib/takeoffs/types";
 
-const WIDTH = 720;
+const WIDTH = 960;
 const BAR = 40;
 const FONT = 13;
 const ROW = 20;
 
 // Materials in wood tones, the rest in shop colours; every segment is also named under the bar.
 const FILL: Record<SegmentKey, string> = {
-  casing: "fill-spruce-700",
-  stool: "fill-spruce-600",
+  casing: "fill-spruce-800",
+  stool: "fill-maple-300",
   apron: "fill-spruce-100",
-  extension: "fill-maple-300",
+  extension: "fill-spruce-600",
   labour: "fill-brass-400",
   markup: "fill-graphite-600",
   tax: "fill-graphite-400",
 };
 
 // Dark fills carry white text inside; light ones graphite (both pairs meet WCAG AA).
-const DARK = new Set<SegmentKey>(["casing", "stool", "markup"]);
+const DARK = new Set<SegmentKey>(["casing", "extension", "markup"]);
 
 /** One bar for the bid, split by where the money goes, with a table for screen readers. */
 export function CostChart({ result }: { result: TakeoffResult }) {
@@ -34,7 +34,7 @@ export function CostChart({ result }: { result: TakeoffResult }) {
     <figure className="space-y-2">
       <figcaption className="text-sm font-semibold text-graphite-900">Where the bid goes</figcaption>
       <div className="overflow-x-auto">
-        <svg viewBox={`0 0 ${WIDTH} ${height}`} className="h-auto w-full min-w-[36rem]" aria-hidden>
+        <svg viewBox={`0 0 ${WIDTH} ${height}`} className="h-auto w-full min-w-[40rem]" aria-hidden>
           {placed.map((p) => (
             <rect key={p.key} x={p.x} y={barTop} width={p.width} height={BAR} className={`${FILL[p.key]} stroke-white`} strokeWidth={1.5} />
           ))}

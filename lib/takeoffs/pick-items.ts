@@ -8,12 +8,16 @@ const size = (w: number, t: number) => `${formatLength(w)} × ${formatLength(t)}
 
 export class MissingItem extends Error {}
 
+/** Dollars per inch at the item's best-value length: among equal candidates the cheaper one is picked. */
+const unitPrice = (i: PriceItemSnapshot) => Math.min(...i.stock.map((s) => s.price / s.length));
+const byValue = (a: PriceItemSnapshot, b: PriceItemSnapshot) => unitPrice(a) - unitPrice(b) || a.name.localeCompare(b.name);
+
 const narrowestWideEnough = (items: PriceItemSnapshot[], width: number) =>
-  items.filter((i) => i.faceWidth >= width - SAME).sort((a, b) => a.faceWidth - b.faceWidth)[0];
+  items.filter((i) => i.faceWidth >= width - SAME).sort((a, b) => a.faceWidth - b.faceWidth || byValue(a, b))[0];
 
 /**
  * Which price-book item each material of one opening type is cut from:
- * casing by its profile (face width × thickness); apron by the same profile, else from the casing
+ * casing by its profile (face width × thickness), the cheaper per foot where several match; apron by the same profile, else from the casing
  * itself (aprons are commonly cut from casing stock — common practice); stool and extension from the
  * narrowest stock wide enough, since both are ripped to width.
  */
@@ -25,11 +29,11 @@ export function pickItems(
   casingOverride: PriceItemSnapshot | null,
 ): Partial<Record<Material, PriceItemSnapshot>> {
   const of = (kind: Material) => items.filter((i) => i.kind === kind);
-  const casing = casingOverride ?? of("casing").find((i) => near(i.faceWidth, spec.casingWidth) && near(i.thickness, spec.casingThickness));
+  const casing = casingOverride ?? of("casing").filter((i) => near(i.faceWidth, spec.casingWidth) && near(i.thickness, spec.casingThickness)).sort(byValue)[0];
   if (!casing) throw new MissingItem(`${mark} needs casing ${size(spec.casingWidth, spec.casingThickness)}: the price book has none of that size.`);
   const picked: Partial<Record<Material, PriceItemSnapshot>> = { casing };
   if (spec.style === "stool-and-apron") {
-    picked.apron = of("apron").find((i) => near(i.faceWidth, casing.faceWidth) && near(i.thickness, casing.thickness)) ?? casing;
+    picked.apron = of("apron").filter((i) => near(i.faceWidth, casing.faceWidth) && near(i.thickness, casing.thickness)).sort(byValue)[0] ?? casing;
     const stool = narrowestWideEnough(of("stool"), widths.stool ?? 0);
     if (!stool) throw new MissingItem(`${mark} needs stool at least ${formatLength(widths.stool ?? 0)} wide: the price book has none that wide.`);
     picked.stool = stool;

@@ -41,7 +41,8 @@ export function TakeoffsView({
       {list.isPending && <p className="text-sm text-graphite-600">Loading takeoffs…</p>}
       {takeoffs && takeoffs.length === 0 && (
         <p className="rounded-lg border border-dashed border-maple-300 bg-white p-6 text-sm text-graphite-700">
-          No takeoffs yet.{canRun ? " Run the first one below once the window list is tagged." : " Estimators and admins run them."}
+          No takeoffs yet.
+          {canRun ? (priceBooks.length > 0 ? " Run the first one below once the window list is tagged." : "") : " Estimators and admins run them."}
         </p>
       )}
       {takeoffs && takeoffs.length > 0 && <TakeoffList takeoffs={takeoffs} pageBase={takeoffsPage(orgSlug, projectId)} />}

@@ -57,7 +57,7 @@ export function TakeoffResultView({ orgSlug, projectId, initial }: { orgSlug: st
         <h3 className="pt-2 text-lg font-semibold">Board order</h3>
         <BoardOrderTable orders={result.orders} />
         <h3 className="pt-2 text-lg font-semibold">Bid</h3>
-        <div className="grid gap-6 rounded-lg border border-maple-200 bg-white p-4 lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)] print:block">
+        <div className="space-y-6 rounded-lg border border-maple-200 bg-white p-4">
           <BidSummary result={result} prices={prices} />
           <CostChart result={result} />
         </div>

@@ -24,7 +24,10 @@ export function TakeoffActions({ orgSlug, projectId, takeoffId, status, canSubmi
   const router = useRouter();
   const queryClient = useQueryClient();
   const sends = useQuery({ queryKey: ["takeoff-sends", takeoffId], queryFn: () => api<{ sends: Send[] }>(`${base}/sends`) });
-  const submit = useMutation({ mutationFn: () => api(`${base}/submit`, { method: "POST" }), onSuccess: () => router.refresh() });
+  const submit = useMutation({
+    mutationFn: () => api(`${base}/submit`, { method: "POST" }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ["takeoff", orgSlug, projectId, takeoffId] }),
+  });
   const copy = useMutation({
     mutationFn: () => api<{ takeoff: { id: string } }>(`${base}/copy`, { method: "POST" }),
     onSuccess: ({ takeoff }) => router.push(`/${orgSlug}/projects/${projectId}/takeoffs/${takeoff.id}`),

@@ -18,5 +18,13 @@ export default async function TakeoffPage({ params }: { params: Promise<{ orgSlu
     if (e instanceof AppError && e.status === 404) notFound();
     throw e;
   });
-  return <TakeoffResultView orgSlug={orgSlug} projectId={projectId} initial={toDetail(takeoff)} />;
+  return (
+    <TakeoffResultView
+      orgSlug={orgSlug}
+      projectId={projectId}
+      initial={toDetail(takeoff)}
+      canSubmit={can("takeoff.submit")}
+      canRun={can("takeoff.run")}
+    />
+  );
 }

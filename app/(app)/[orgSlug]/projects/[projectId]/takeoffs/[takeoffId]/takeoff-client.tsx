@@ -10,6 +10,7 @@ import { OpeningTypeSection } from "@/components/takeoffs/opening-type-section";
 import { PrintSheet } from "@/components/takeoffs/print-sheet";
 import { TakeoffHeader } from "@/components/takeoffs/takeoff-header";
 import { UnitTypeTotals } from "@/components/takeoffs/unit-type-totals";
+import { TakeoffActions } from "@/components/takeoff-actions/takeoff-actions";
 import { api } from "@/lib/api-client";
 import { takeoffsApi, takeoffsPage, type TakeoffDetail } from "@/lib/takeoffs/view";
 
@@ -28,7 +29,19 @@ function Part({ id, title, intro, children }: { id: string; title: string; intro
 }
 
 /** A saved takeoff, read-only: per opening type, per unit type, then the job's order and bid. */
-export function TakeoffResultView({ orgSlug, projectId, initial }: { orgSlug: string; projectId: string; initial: TakeoffDetail }) {
+export function TakeoffResultView({
+  orgSlug,
+  projectId,
+  initial,
+  canSubmit,
+  canRun,
+}: {
+  orgSlug: string;
+  projectId: string;
+  initial: TakeoffDetail;
+  canSubmit: boolean;
+  canRun: boolean;
+}) {
   // Figures never change once saved; the query only keeps the status (draft or submitted) current.
   const { data } = useQuery({
     queryKey: ["takeoff", orgSlug, projectId, initial.id],
@@ -42,6 +55,7 @@ export function TakeoffResultView({ orgSlug, projectId, initial }: { orgSlug: st
     <div className="space-y-8">
       <PrintSheet />
       <TakeoffHeader t={t} listHref={takeoffsPage(orgSlug, projectId)} />
+      <TakeoffActions orgSlug={orgSlug} projectId={projectId} takeoffId={t.id} status={t.status} canSubmit={canSubmit} canRun={canRun} />
       <Part id="per-opening" title="Per opening type" intro="What each window gets, as the crew cuts it.">
         <div className="space-y-4">
           {result.openingTypes.map((ot) => (

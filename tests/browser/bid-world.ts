@@ -1,0 +1,74 @@
+import { expect, type Page } from "@playwright/test";
+import { pool, db } from "@/db/client";
+import { memberships, users } from "@/db/schema";
+import { createOpeningType } from "@/db/queries/opening-types";
+import { createPlanSet } from "@/db/queries/plan-sets";
+import { createProject } from "@/db/queries/projects";
+import { listSheets, updateSheet } from "@/db/queries/sheets";
+import { createTag } from "@/db/queries/tags";
+import { createUnitType } from "@/db/queries/unit-types";
+import { signUpUser } from "@/db/queries/users";
+import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
+import { hashPassword } from "@/lib/auth/password";
+import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
+import { inspectPdf } from "@/lib/pdf/inspect";
+
+/**
+ * The state a bid starts from, set up directly (the plans and sign-up screens have their own tests):
+ * a company with an admin, an estimator and a project manager, a tagged project and a price book.
+ */
+export async function seedBidWorld(id: string) {
+  const password = "finish-nailer-5555";
+  const orgName = `Harrowgate Trim ${id}`;
+  const { user: admin, organisation } = await signUpUser({ name: "Ada Harrow", email: `ada.${id}@harrowgate.test`, password, organisationName: orgName });
+  const member = async (name: string, email: string, role: "estimator" | "project_manager") => {
+    const [u] = await db.insert(users).values({ name, email, passwordHash: await hashPassword(password) }).returning({ id: users.id, email: users.email });
+    await db.insert(memberships).values({ orgId: organisation.id, userId: u!.id, role });
+    return u!;
+  };
+  const estimator = await member("Eli Brandt", `eli.${id}@harrowgate.test`, "estimator");
+  const manager = await member("Mara Quint", `mara.${id}@harrowgate.test`, "project_manager");
+  const projectName = `Larkspur Commons C ${id}`;
+  const project = await createProject({ orgId: organisation.id, userId: admin.id, input: { name: projectName, generalContractor: "Fenwick & Hale Builders", bidDue: "2027-02-12" } });
+  const scope = { orgId: organisation.id, projectId: project.id, userId: admin.id };
+
+  const { bytes, sheets: drawn } = await generatePlanSet({ unitTypes: ["A", "B"] });
+  await createPlanSet(scope, { key: `bids-${id}`, name: "set.pdf", size: bytes.byteLength }, (await inspectPdf(bytes)).pages);
+  const units = { "Type A": (await createUnitType(scope, { name: "Type A", count: 12 })).id, "Type B": (await createUnitType(scope, { name: "Type B", count: 8 })).id } as Record<string, string>;
+  const types = new Map<string, string>();
+  for (const [mark, size] of Object.entries(DEMO_WINDOW_TYPES) as [WindowMark, (typeof DEMO_WINDOW_TYPES)[WindowMark]][]) {
+    const trimSpec = mark === "W3" ? { casingWidth: 3.5, casingThickness: 0.75 } : {};
+    types.set(mark, (await createOpeningType(scope, { mark, width: size.widthInches, height: size.heightInches, setback: 1.4375, trimSpec })).id);
+  }
+  for (const [i, sheet] of (await listSheets(scope)).entries()) {
+    const plan = drawn[i]!;
+    await updateSheet(scope, sheet.id, { version: sheet.version, unitTypeId: plan.unitTypeName ? (units[plan.unitTypeName] ?? null) : null });
+    for (const w of plan.windows) await createTag(scope, { sheetId: sheet.id, openingTypeId: types.get(w.mark)!, x: w.x, y: w.y });
+  }
+  await seedDemoPriceBook(organisation.id, admin.id);
+  await pool.end();
+
+  return {
+    password,
+    orgName,
+    orgSlug: organisation.slug,
+    projectId: project.id,
+    projectName,
+    admin,
+    estimator,
+    manager,
+    /** The admin opens the price book and changes the 12' price of the FJ pine 2 1/2 casing. */
+    async editPriceThroughUi(page: Page) {
+      await page.goto(`/${organisation.slug}/price-books`);
+      await page.getByRole("link", { name: /Alder Bend Millwork/ }).click();
+      const cell = page.getByRole("button", { name: /^12' price of Casing 2 1\/2 colonial — FJ pine: .*Edit$/ });
+      await cell.click();
+      const input = page.getByLabel(/^12' price of Casing 2 1\/2 colonial — FJ pine/);
+      await input.fill("11.25");
+      await input.press("Enter");
+      await expect(page.getByRole("button", { name: /^12' price of Casing 2 1\/2 colonial — FJ pine: \$?11\.25\. Edit$/ })).toBeVisible();
+      // …and the change is on record, by this admin.
+      await expect(page.getByText(/Ada Harrow/).first()).toBeVisible();
+    },
+  };
+}

@@ -1,0 +1,96 @@
+/**
+ * Plans become a bid: an admin changes a price, an estimator runs two takeoffs with different casing, a
+ * project manager compares them, marks one as the submitted bid (which locks it), downloads the material
+ * order and the bid PDF (its text checked), and e-mails it — the message is in the outbox.
+ */
+import { readFile } from "node:fs/promises";
+import { expect, test, type Page } from "@playwright/test";
+import { seedBidWorld } from "./bid-world";
+import { runId, signIn, signOut } from "./helpers";
+
+const id = runId();
+
+async function pdfText(path: string) {
+  const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
+  const doc = await pdfjs.getDocument({ data: new Uint8Array(await readFile(path)), isEvalSupported: false, standardFontDataUrl: "node_modules/pdfjs-dist/standard_fonts/" }).promise;
+  const content = await (await doc.getPage(1)).getTextContent();
+  return content.items.map((i) => ("str" in i ? i.str : "")).join(" ");
+}
+
+async function runTakeoff(page: Page, base: string, name: string, casing: RegExp | null) {
+  await page.goto(`${base}/takeoffs`);
+  await page.getByLabel("Name", { exact: true }).fill(name);
+  if (casing) {
+    const select = page.getByLabel("Alternate casing (optional)");
+    const value = await select.locator("option", { hasText: casing }).first().getAttribute("value");
+    await select.selectOption(value!);
+  }
+  await page.getByRole("button", { name: "Run takeoff" }).click();
+  await expect(page).toHaveURL(/\/takeoffs\/[0-9a-f-]{36}$/, { timeout: 60_000 });
+  await expect(page.getByRole("heading", { name: "Per opening type" })).toBeVisible();
+  return page.url().split("/").pop()!;
+}
+
+test("price change, two takeoffs, compare, lock, documents, send", async ({ page }) => {
+  test.setTimeout(300_000);
+  const world = await seedBidWorld(id);
+  const base = `/${world.orgSlug}/projects/${world.projectId}`;
+
+  await test.step("the admin changes a price in the price book", async () => {
+    await signIn(page, world.admin.email, world.password);
+    await expect(page).toHaveURL(/\/projects$/);
+    await world.editPriceThroughUi(page);
+    await signOut(page);
+  });
+
+  let baseId = "";
+  let altId = "";
+  await test.step("the estimator runs a base bid and an alternate in poplar casing", async () => {
+    await signIn(page, world.estimator.email, world.password);
+    await expect(page).toHaveURL(/\/projects$/);
+    baseId = await runTakeoff(page, base, "Base bid", null);
+    altId = await runTakeoff(page, base, "Alternate — poplar casing", /poplar/i);
+    await signOut(page);
+  });
+
+  await test.step("the project manager compares them and sees why they differ", async () => {
+    await signIn(page, world.manager.email, world.password);
+    await expect(page).toHaveURL(/\/projects$/);
+    await page.goto(`/${world.orgSlug}/compare?ids=${baseId},${altId}`);
+    await expect(page.getByRole("heading", { name: "Side by side" })).toBeVisible();
+    await expect(page.getByText(/Alternate casing: each window's own → .*poplar/i)).toBeVisible();
+    await expect(page.getByRole("row", { name: /Bid total/ })).toContainText("▲");
+  });
+
+  await test.step("marks the base bid as submitted, which locks it", async () => {
+    await page.goto(`${base}/takeoffs/${baseId}`);
+    page.once("dialog", (d) => void d.accept());
+    await page.getByRole("button", { name: "Mark as submitted bid" }).click();
+    await expect(page.getByText("🔒 Submitted bid — locked")).toBeVisible();
+    const rename = await page.request.patch(`/api/orgs/${world.orgSlug}/projects/${world.projectId}/takeoffs/${baseId}`, { data: { name: "Changed" } });
+    expect(rename.status()).toBe(403); // a project manager never renames; estimators get 409 "locked" (integration tests)
+  });
+
+  await test.step("downloads the material order and the bid PDF", async () => {
+    const [csv] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Material order (CSV)" }).click()]);
+    const text = await readFile((await csv.path())!, "utf8");
+    expect(text.split("\r\n")[0]).toBe("material,item,supplier_code,rip_width,stock_length,boards_planned,boards_to_buy,unit_price,extended");
+    expect(text).toContain("DEMO-C250-FJ");
+    const [pdf] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Bid summary (PDF)" }).click()]);
+    const body = await pdfText((await pdf.path())!);
+    for (const expected of [world.orgName, world.projectName, "Fenwick & Hale Builders", "Exclusions", "Assumptions", "Valid until", "Bid total"]) {
+      expect(body).toContain(expected);
+    }
+  });
+
+  await test.step("e-mails the bid; the message and its record are there", async () => {
+    const to = `estimating.${id}@fenwick-hale.test`;
+    await page.getByLabel("E-mail the bid to").fill(to);
+    await page.getByRole("button", { name: "Send bid" }).click();
+    await expect(page.getByText(`Sent to ${to}.`)).toBeVisible();
+    await expect(page.getByRole("list", { name: "Bid e-mails sent" })).toContainText(to);
+    await page.goto("/demo/outbox");
+    const message = page.getByTestId("outbox-message").filter({ hasText: to }).first();
+    await expect(message).toContainText(`Window trim bid — ${world.projectName}`);
+  });
+});

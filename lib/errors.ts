@@ -1,4 +1,3 @@
-import { NextResponse } from "next/server";
 import { ZodError } from "zod";
 
 /** Errors that carry their HTTP meaning; everything the API refuses is one of these. */
@@ -43,14 +42,4 @@ export function toAppError(error: unknown): AppError | null {
   if (error instanceof AppError) return error;
   if (error instanceof ZodError) return invalid(fieldErrors(error));
   return null;
-}
-
-/** The one mapping from errors to HTTP. Unknown errors are logged and answered 500 without detail. */
-export function errorResponse(error: unknown): NextResponse {
-  const known = toAppError(error);
-  if (known) {
-    return NextResponse.json({ ...known.details, error: known.message, fields: known.fields }, { status: known.status });
-  }
-  console.error(error);
-  return NextResponse.json({ error: "Something went wrong on our side." }, { status: 500 });
 }

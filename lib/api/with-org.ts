@@ -1,7 +1,8 @@
 import type { NextRequest } from "next/server";
 import { getOrgContext, type OrgContext } from "@/db/queries/memberships";
 import { userIdFromRequest } from "@/lib/auth/session";
-import { errorResponse, forbidden, notFound, unauthenticated } from "@/lib/errors";
+import { forbidden, notFound, unauthenticated } from "@/lib/errors";
+import { errorResponse } from "./error-response";
 import { can, type Permission } from "@/lib/permissions";
 
 type Params = Record<string, string>;

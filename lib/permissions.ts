@@ -9,6 +9,9 @@ export const permissions = {
   "project.write": ["admin", "estimator"],
   "member.read": ["admin", "estimator", "project_manager"],
   "member.write": ["admin"],
+  // The company's default trim spec, kerf and waste allowance.
+  "settings.read": ["admin", "estimator", "project_manager"],
+  "settings.write": ["admin"],
   // Plan sets, sheets, unit types, the window list and tags.
   "plans.read": ["admin", "estimator", "project_manager"],
   "plans.write": ["admin", "estimator"],

@@ -10,6 +10,7 @@ export function NavLinks({ orgSlug }: { orgSlug: string }) {
     { href: `/${orgSlug}/price-books`, label: "Price books" },
     { href: `/${orgSlug}/compare`, label: "Compare" },
     { href: `/${orgSlug}/members`, label: "Members" },
+    { href: `/${orgSlug}/settings`, label: "Settings" },
   ];
   return (
     <nav className="flex gap-1 text-sm">

@@ -45,6 +45,9 @@ export function TakeoffActions({ orgSlug, projectId, takeoffId, status, canSubmi
           <a className="rounded-md border border-graphite-400 bg-white px-3 py-2 text-sm font-semibold hover:bg-maple-100" href={`${base}/bid-pdf`} download>
             Bid summary (PDF)
           </a>
+          <a className="rounded-md border border-graphite-400 bg-white px-3 py-2 text-sm font-semibold hover:bg-maple-100" href={`/${orgSlug}/projects/${projectId}/takeoffs/${takeoffId}/cut-list`}>
+            Crew cut list (print)
+          </a>
           {canSubmit && status === "draft" && (
             <Button
               look="primary"

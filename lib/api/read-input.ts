@@ -1,6 +1,7 @@
 import type { z } from "zod";
 import type { NextRequest } from "next/server";
 import { versionParam } from "@/lib/validators/plans";
+import { isUuid } from "@/lib/ids";
 import { AppError, fieldErrors, invalid } from "@/lib/errors";
 
 const MAX_BODY_BYTES = 64 * 1024;
@@ -25,7 +26,7 @@ export async function readJson<S extends z.ZodType>(req: Request, schema: S): Pr
 
 /** Route ids that are not UUIDs cannot name a row: answer 404 rather than letting PostgreSQL raise. */
 export function parseId(value: string | undefined, what: string): string {
-  if (!value || !/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value)) {
+  if (!isUuid(value)) {
     throw new AppError(404, `No such ${what}.`);
   }
   return value;

@@ -6,16 +6,16 @@ import { column, explainDifferences } from "@/lib/takeoffs/compare";
 import { Card, Notice } from "@/components/ui/card";
 import { ComparisonTable } from "@/components/compare/comparison-table";
 import { TakeoffPicker } from "@/components/compare/takeoff-picker";
+import { isUuid } from "@/lib/ids";
 
 export const metadata: Metadata = { title: "Compare takeoffs" };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function ComparePage({ params, searchParams }: { params: Promise<{ orgSlug: string }>; searchParams: Promise<{ ids?: string | string[] }> }) {
   const { orgSlug } = await params;
   const { org } = await requireOrg(orgSlug);
   const raw = (await searchParams).ids;
-  const ids = [...new Set((Array.isArray(raw) ? raw : raw ? raw.split(",") : []).filter((id) => UUID.test(id)))];
+  const ids = [...new Set((Array.isArray(raw) ? raw : raw ? raw.split(",") : []).filter((id) => isUuid(id)))];
   const all = await listOrganisationTakeoffs(org.orgId);
 
   let comparison: { columns: ReturnType<typeof column>[]; reasons: string[][] } | null = null;

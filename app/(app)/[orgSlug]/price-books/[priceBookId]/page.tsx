@@ -4,15 +4,15 @@ import { getBookSummary } from "@/db/queries/price-book-scope";
 import { requireOrg } from "@/lib/auth/page-context";
 import { AppError } from "@/lib/errors";
 import { PriceBookView } from "./price-book-client";
+import { isUuid } from "@/lib/ids";
 
 export const metadata: Metadata = { title: "Price book" };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function PriceBookPage({ params }: { params: Promise<{ orgSlug: string; priceBookId: string }> }) {
   const { orgSlug, priceBookId } = await params;
   const { org, can } = await requireOrg(orgSlug);
-  if (!UUID.test(priceBookId)) notFound();
+  if (!isUuid(priceBookId)) notFound();
   // Another organisation's book is "not found", exactly like one that never existed.
   await getBookSummary({ orgId: org.orgId, priceBookId }).catch((e) => {
     if (e instanceof AppError && e.status === 404) notFound();

@@ -5,13 +5,13 @@ import { getProject } from "@/db/queries/projects";
 import { requireOrg } from "@/lib/auth/page-context";
 import { AppError } from "@/lib/errors";
 import { ProjectTabs } from "@/components/shell/project-tabs";
+import { isUuid } from "@/lib/ids";
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function ProjectLayout({ children, params }: { children: ReactNode; params: Promise<{ orgSlug: string; projectId: string }> }) {
   const { orgSlug, projectId } = await params;
   const { org } = await requireOrg(orgSlug);
-  if (!UUID.test(projectId)) notFound();
+  if (!isUuid(projectId)) notFound();
   const project = await getProject({ orgId: org.orgId, projectId }).catch((e) => {
     if (e instanceof AppError && e.status === 404) notFound();
     throw e;

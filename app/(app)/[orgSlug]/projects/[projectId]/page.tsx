@@ -4,15 +4,15 @@ import { getProject } from "@/db/queries/projects";
 import { requireOrg } from "@/lib/auth/page-context";
 import { AppError } from "@/lib/errors";
 import { ProjectDetail } from "./project-client";
+import { isUuid } from "@/lib/ids";
 
 export const metadata: Metadata = { title: "Project" };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function ProjectPage({ params }: { params: Promise<{ orgSlug: string; projectId: string }> }) {
   const { orgSlug, projectId } = await params;
   const { org, can } = await requireOrg(orgSlug);
-  if (!UUID.test(projectId)) notFound();
+  if (!isUuid(projectId)) notFound();
   const project = await getProject({ orgId: org.orgId, projectId }).catch((e) => {
     if (e instanceof AppError && e.status === 404) notFound();
     throw e;

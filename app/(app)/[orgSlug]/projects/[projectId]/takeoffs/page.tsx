@@ -6,10 +6,10 @@ import { priceBookItems, priceBooks } from "@/db/schema";
 import { requireOrg } from "@/lib/auth/page-context";
 import type { CasingChoice, PriceBookChoice } from "@/components/takeoffs/run-takeoff-form";
 import { TakeoffsView } from "./takeoffs-client";
+import { isUuid } from "@/lib/ids";
 
 export const metadata: Metadata = { title: "Takeoffs" };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** The books and casings the run form offers: names and sizes only, never prices. */
 async function runChoices(orgId: string): Promise<{ priceBooks: PriceBookChoice[]; casings: CasingChoice[] }> {
@@ -35,7 +35,7 @@ async function runChoices(orgId: string): Promise<{ priceBooks: PriceBookChoice[
 export default async function TakeoffsPage({ params }: { params: Promise<{ orgSlug: string; projectId: string }> }) {
   const { orgSlug, projectId } = await params;
   const { org, can } = await requireOrg(orgSlug);
-  if (!UUID.test(projectId)) notFound();
+  if (!isUuid(projectId)) notFound();
   const canRun = can("takeoff.run");
   const choices = canRun ? await runChoices(org.orgId) : { priceBooks: [], casings: [] };
   return (

@@ -1,0 +1,98 @@
+"use client";
+
+import { useMutation } from "@tanstack/react-query";
+import { useState, type FormEvent } from "react";
+import { Button } from "@/components/ui/button";
+import { Card, Notice } from "@/components/ui/card";
+import { Field, Select, TextInput } from "@/components/ui/field";
+import { api, ApiError } from "@/lib/api-client";
+import { formatLength, parseLength, type TrimSpec } from "@/takeoff";
+
+type Settings = { trimDefaults: TrimSpec; trimDefaultsOwn: boolean; kerf: number; wastePercent: number };
+const LENGTHS = ["casingWidth", "casingThickness", "reveal", "stoolHorn", "stoolProjection", "apronInset", "extensionThickness"] as const;
+const LABELS: Record<(typeof LENGTHS)[number], string> = {
+  casingWidth: "Casing width",
+  casingThickness: "Casing thickness",
+  reveal: "Reveal (blank: 1/8\")",
+  stoolHorn: "Stool horn (blank: 2 × casing thickness)",
+  stoolProjection: "Stool projection (blank: 1\")",
+  apronInset: "Apron inset (blank: 0)",
+  extensionThickness: "Extension thickness (blank: 3/4\")",
+};
+
+/** The company's defaults: what a new window type starts from, and the kerf and waste every takeoff uses. */
+export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; initial: Settings; canWrite: boolean }) {
+  const [local, setLocal] = useState<Record<string, string>>({});
+  const save = useMutation({
+    mutationFn: (body: unknown) => api<{ settings: Settings }>(`/api/orgs/${orgSlug}/settings`, { method: "PATCH", body }),
+  });
+  const fields = save.error instanceof ApiError ? save.error.fields : {};
+  const errors = { ...fields, ...local };
+
+  function submit(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const form = Object.fromEntries(new FormData(e.currentTarget)) as Record<string, string>;
+    const bad: Record<string, string> = {};
+    const spec: Record<string, unknown> = { style: form.style, apronReturns: form.apronReturns === "yes" };
+    for (const key of LENGTHS) {
+      const text = form[key]?.trim();
+      if (!text) continue;
+      try {
+        spec[key] = parseLength(text);
+      } catch {
+        bad[`trimDefaults.${key}`] = "Write a length such as 2 1/2 or 11/16.";
+      }
+    }
+    setLocal(bad);
+    if (Object.keys(bad).length === 0) save.mutate({ trimDefaults: spec, kerf: form.kerf, wastePercent: form.wastePercent });
+  }
+
+  const t = initial.trimDefaults;
+  const len = (v: number | undefined) => (v === undefined ? "" : formatLength(v).replace(/"$/, ""));
+  return (
+    <div className="max-w-3xl space-y-6">
+      <h1 className="text-2xl font-bold">Company settings</h1>
+      <form onSubmit={submit} noValidate className="space-y-6">
+        <fieldset disabled={!canWrite} className="space-y-6">
+          <Card title="Trim defaults">
+            <p className="mb-3 text-sm text-graphite-700">
+              A new window type starts from these. {initial.trimDefaultsOwn ? "" : "Until you save your own, Miterwise's starting values are shown."}
+            </p>
+            <div className="grid gap-3 sm:grid-cols-2">
+              <Field label="Style" name="style">
+                <Select name="style" defaultValue={t.style}>
+                  <option value="stool-and-apron">Stool and apron</option>
+                  <option value="picture-frame">Picture frame</option>
+                </Select>
+              </Field>
+              <Field label="Apron ends" name="apronReturns">
+                <Select name="apronReturns" defaultValue={t.apronReturns === false ? "no" : "yes"}>
+                  <option value="yes">Return mitered</option>
+                  <option value="no">Square</option>
+                </Select>
+              </Field>
+              {LENGTHS.map((key) => (
+                <Field key={key} label={LABELS[key]} name={key} error={errors[`trimDefaults.${key}`]}>
+                  <TextInput name={key} defaultValue={len(t[key])} error={errors[`trimDefaults.${key}`]} />
+                </Field>
+              ))}
+            </div>
+          </Card>
+          <Card title="Takeoffs">
+            <div className="grid gap-3 sm:grid-cols-2">
+              <Field label="Saw kerf" name="kerf" error={errors.kerf} hint="Taken by every cut, e.g. 1/8.">
+                <TextInput name="kerf" defaultValue={len(initial.kerf)} error={errors.kerf} />
+              </Field>
+              <Field label="Waste allowance (%)" name="wastePercent" error={errors.wastePercent} hint="Extra boards for defects and miscuts.">
+                <TextInput name="wastePercent" inputMode="decimal" defaultValue={String(initial.wastePercent)} error={errors.wastePercent} />
+              </Field>
+            </div>
+          </Card>
+        </fieldset>
+        {save.isError && <Notice tone="error">{save.error.message}</Notice>}
+        {save.isSuccess && <Notice>Saved. New window types and takeoffs use these from now on.</Notice>}
+        {canWrite ? <Button type="submit" disabled={save.isPending}>Save settings</Button> : <p className="text-sm text-graphite-600">Only admins change these.</p>}
+      </form>
+    </div>
+  );
+}

@@ -1,0 +1,61 @@
+import { beforeEach, describe, expect, it } from "vitest";
+import * as settingsRoute from "@/app/api/orgs/[orgSlug]/settings/route";
+import * as openingTypesRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/opening-types/route";
+import * as takeoffsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/takeoffs/route";
+import type { Role } from "@/db/schema";
+import type { TakeoffView } from "@/db/queries/takeoffs";
+import { call, sessionCookie } from "./helpers/http";
+import { snapshot } from "./helpers/snapshot";
+import { addTestPriceBook } from "./helpers/takeoff-world";
+import { makeOrg, type World } from "./helpers/world";
+
+type Actor = Role | "outsider" | "anonymous";
+let home: World;
+let other: World;
+beforeEach(async () => {
+  home = await makeOrg("Pennywort");
+  other = await makeOrg("Larchmere");
+});
+const cookieOf = async (a: Actor) => (a === "anonymous" ? undefined : sessionCookie(a === "outsider" ? other.people.admin : home.people[a]));
+const patch = async (body: unknown, actor: Actor = "admin") =>
+  call(settingsRoute.PATCH, { method: "PATCH", path: "/x", params: { orgSlug: home.org.slug }, body, cookie: await cookieOf(actor) });
+
+describe("company settings", () => {
+  it.each([
+    ["admin", 200, 200],
+    ["estimator", 200, 403],
+    ["project_manager", 200, 403],
+    ["outsider", 404, 404],
+    ["anonymous", 401, 401],
+  ] as const)("%s: read → %i, change → %i", async (actor, read, write) => {
+    expect((await call(settingsRoute.GET, { method: "GET", path: "/x", params: { orgSlug: home.org.slug }, cookie: await cookieOf(actor) })).status).toBe(read);
+    const before = await snapshot();
+    expect((await patch({ wastePercent: 7 }, actor)).status).toBe(write);
+    if (write !== 200) expect(await snapshot()).toBe(before);
+  });
+
+  it.each([
+    [{ kerf: "3/4" }, "kerf", /at most 1\/2/],
+    [{ wastePercent: -1 }, "wastePercent", /negative/],
+    [{ trimDefaults: { style: "stool-and-apron", casingWidth: 2.5, casingThickness: 0.75, reveal: 2.5 } }, "trimDefaults.reveal", /less than the casing width/],
+    [{ colour: "green" }, "_", /Unrecognized|colour/],
+  ])("refuses %j naming %s, changing nothing", async (body, field, message) => {
+    const before = await snapshot();
+    const res = await patch(body);
+    expect(res.status).toBe(422);
+    expect(res.json.fields?.[field]).toMatch(message);
+    expect(await snapshot()).toBe(before);
+  });
+
+  it("new window types start from the company's trim defaults, and takeoffs use its kerf and waste", async () => {
+    const spec = { style: "picture-frame", casingWidth: 3.5, casingThickness: 0.75 };
+    expect((await patch({ trimDefaults: spec, kerf: "3/32", wastePercent: 5 })).status).toBe(200);
+    const cookie = await cookieOf("estimator");
+    const params = { orgSlug: home.org.slug, projectId: home.project.id };
+    const created = await call(openingTypesRoute.POST, { method: "POST", path: "/x", params, body: { mark: "W8", width: 30, height: 40, setback: 0 }, cookie });
+    expect(created.json.openingType).toMatchObject({ trimSpec: spec });
+    const { priceBookId } = await addTestPriceBook(home.org.id);
+    const run = await call(takeoffsRoute.POST, { method: "POST", path: "/x", params, body: { name: "With our settings", priceBookId }, cookie });
+    expect((run.json.takeoff as TakeoffView).inputs.settings).toEqual({ kerf: 3 / 32, wastePercent: 5 });
+  });
+});

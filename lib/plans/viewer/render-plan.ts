@@ -10,8 +10,11 @@
  */
 import type { Size, View } from "./view-transform";
 
-/** 4096²: the canvas area limit of iOS Safari, and a bitmap that renders in well under a second. */
-export const MAX_CANVAS_PIXELS = 4096 * 4096;
+/**
+ * 1536² (2.4 M pixels): past this the base stops growing and only the region in view is re-rendered, which
+ * keeps a zoom step on a dense sheet near a quarter second (bench:plans); well inside iOS Safari's 16 M limit.
+ */
+export const MAX_CANVAS_PIXELS = 1536 * 1536;
 
 /** The CSS scale the full-page base layer renders at: the settled zoom, or less if that would pass the cap. */
 export function baseRenderScale(page: Size, zoom: number, dpr: number, cap = MAX_CANVAS_PIXELS): number {

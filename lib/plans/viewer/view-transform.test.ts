@@ -44,7 +44,7 @@ describe("view transform", () => {
 
 describe("render plan", () => {
   it("renders the whole page at the zoom while it fits under the cap", () => {
-    expect(baseRenderScale(ARCH_E, 0.3, 2)).toBe(0.3);
+    expect(baseRenderScale(ARCH_E, 0.2, 2)).toBe(0.2);
   });
 
   it("caps the base bitmap of an ARCH E sheet at 100% on a 2x screen", () => {

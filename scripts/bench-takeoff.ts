@@ -16,18 +16,7 @@ import {
   type TrimSpec,
 } from "../takeoff/index";
 import { loadHighs } from "../takeoff/stock-plan/highs-solver";
-
-/** mulberry32: a small deterministic PRNG, so every run plans the same job. */
-function prng(start: number): () => number {
-  let a = start >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { prng } from "../lib/prng";
 
 function generateJob(jobNumber: number): TakeoffLine[] {
   const rand = prng(jobNumber);

@@ -7,24 +7,13 @@
 import type { Pen } from "./pen";
 import type { Placement } from "./draw-plan";
 import type { RoomDef, RoomKind } from "./layouts";
+import { prng } from "@/lib/prng";
 
 export const FLOORING_WEIGHT = 0.15;
 const WET: ReadonlySet<RoomKind> = new Set(["bath", "kitchen", "laundry", "mail"]);
 const SKIP: ReadonlySet<RoomKind> = new Set(["stair"]);
 
 type Segment = [number, number, number, number];
-
-/** mulberry32: a small deterministic PRNG, so the same options give byte-identical sheets. */
-function prng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function pattern(rooms: readonly RoomDef[], p: Placement, spacing: number, seed: number): { rows: Segment[]; joints: Segment[] } {
   const rows: Segment[] = [];

@@ -6,9 +6,8 @@ import { KIND_LABELS, MATERIAL_KINDS } from "@/lib/price-book/kinds";
 import type { PriceBookItemView } from "@/lib/price-book/types";
 import { buildColumns, features } from "./item-columns";
 import { useItemsControls } from "./items-context";
+import { SortableTh } from "@/components/ui/sortable-th";
 
-const SORT_MARK = { asc: "▲", desc: "▼" } as const;
-const SORT_WORD = { asc: "ascending", desc: "descending" } as const;
 /** On a narrow screen the table scrolls sideways; the name stays in view so each row stays named. */
 const STICKY = "sticky left-0 z-10";
 const filterInput = "rounded-md border border-graphite-400 bg-white px-2.5 py-1.5 text-sm text-graphite-900 placeholder:text-graphite-500";
@@ -70,23 +69,15 @@ export function ItemsTable({ items, lengths }: { items: PriceBookItemView[]; len
                     const sorted = header.column.getIsSorted();
                     const end = header.column.columnDef.meta?.align === "end";
                     return (
-                      <th
+                      <SortableTh
                         key={header.id}
-                        scope="col"
-                        aria-sort={sorted ? SORT_WORD[sorted] : undefined}
-                        className={`whitespace-nowrap border-b border-maple-200 px-1.5 py-2 font-semibold ${end ? "text-right" : "text-left"} ${header.column.id === "name" ? `${STICKY} bg-maple-100` : ""}`}
+                        sorted={sorted}
+                        end={end}
+                        sticky={header.column.id === "name"}
+                        onToggle={header.column.getCanSort() ? header.column.getToggleSortingHandler() : undefined}
                       >
-                        {header.column.getCanSort() ? (
-                          <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-graphite-900">
-                            <table.FlexRender header={header} />
-                            <span aria-hidden className={`text-[0.65rem] ${sorted ? "text-brass-700" : "text-graphite-400"}`}>
-                              {sorted ? SORT_MARK[sorted] : "↕"}
-                            </span>
-                          </button>
-                        ) : (
-                          <table.FlexRender header={header} />
-                        )}
-                      </th>
+                        <table.FlexRender header={header} />
+                      </SortableTh>
                     );
                   })}
               </tr>

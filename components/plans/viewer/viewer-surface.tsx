@@ -2,28 +2,16 @@
 
 import dynamic from "next/dynamic";
 import type { ReactNode, RefObject } from "react";
-import type { PDFPageProxy } from "pdfjs-dist";
-import type { DetailRegion } from "@/lib/plans/viewer/render-plan";
-import type { Size, View } from "@/lib/plans/viewer/view-transform";
+import type { PdfPageLayerProps } from "./pdf-page-layer";
 import type { Tool } from "./tools";
 import type { usePointerGestures } from "./use-pointer-gestures";
 
 // react-pdf and pdf.js touch browser APIs at import time: load them on the client only.
 const PdfPageLayer = dynamic(() => import("./pdf-page-layer"), { ssr: false });
 
-interface Props {
+/** Everything the page layer takes, plus what the surface itself needs. */
+interface Props extends PdfPageLayerProps {
   boxRef: RefObject<HTMLDivElement | null>;
-  file: { orgSlug: string; projectId: string; planSetId: string };
-  pageNumber: number;
-  rotation: number;
-  view: View | null;
-  pageSize: Size;
-  baseScale: number | null;
-  detail: DetailRegion | null;
-  dpr: number;
-  page: PDFPageProxy | null;
-  onPage: (page: PDFPageProxy) => void;
-  onError: (error: Error) => void;
   loadError: string | null;
   tool: Tool;
   gestures: ReturnType<typeof usePointerGestures>;

@@ -4,9 +4,8 @@ import { useTable, type SortingState } from "@tanstack/react-table";
 import { Fragment, useState } from "react";
 import { columns, features, type WindowListRow } from "./table-columns";
 import { useWindowListControls } from "./window-list-context";
+import { SortableTh } from "@/components/ui/sortable-th";
 
-const SORT_MARK = { asc: "▲", desc: "▼" } as const;
-const SORT_WORD = { asc: "ascending", desc: "descending" } as const;
 /** On a narrow screen the list scrolls sideways; the mark stays in view so each row stays named. */
 const STICKY = "sticky left-0 z-10";
 
@@ -38,25 +37,15 @@ export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
                   const sorted = header.column.getIsSorted();
                   const end = header.column.columnDef.meta?.align === "end";
                   return (
-                    <th
+                    <SortableTh
                       key={header.id}
-                      scope="col"
-                      aria-sort={sorted ? SORT_WORD[sorted] : undefined}
-                      className={`whitespace-nowrap border-b border-maple-200 px-1.5 py-2 font-semibold ${end ? "text-right" : "text-left"} ${
-                        header.column.id === "mark" ? STICKY + " bg-maple-100" : ""
-                      }`}
+                      sorted={sorted}
+                      end={end}
+                      sticky={header.column.id === "mark"}
+                      onToggle={header.column.getCanSort() ? header.column.getToggleSortingHandler() : undefined}
                     >
-                      {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-graphite-900">
-                          <table.FlexRender header={header} />
-                          <span aria-hidden className={`text-[0.65rem] ${sorted ? "text-brass-700" : "text-graphite-400"}`}>
-                            {sorted ? SORT_MARK[sorted] : "↕"}
-                          </span>
-                        </button>
-                      ) : (
-                        <table.FlexRender header={header} />
-                      )}
-                    </th>
+                      <table.FlexRender header={header} />
+                    </SortableTh>
                   );
                 })}
             </tr>

@@ -1,5 +1,5 @@
 import { expect, type Page } from "@playwright/test";
-import { pool, db } from "@/db/client";
+import { db } from "@/db/client";
 import { memberships, users } from "@/db/schema";
 import { createOpeningType } from "@/db/queries/opening-types";
 import { createPlanSet } from "@/db/queries/plan-sets";
@@ -46,7 +46,7 @@ export async function seedBidWorld(id: string) {
     for (const w of plan.windows) await createTag(scope, { sheetId: sheet.id, openingTypeId: types.get(w.mark)!, x: w.x, y: w.y });
   }
   await seedDemoPriceBook(organisation.id, admin.id);
-  await pool.end();
+  // The pool stays open: several spec files seed a world in the same worker process.
 
   return {
     password,

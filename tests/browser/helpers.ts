@@ -55,3 +55,27 @@ export async function expectSignedInAs(page: Page, who: { name: string; orgName:
   await expect(switcher).toContainText(who.roleLabel);
   await expect(page.getByRole("banner").getByText(who.name, { exact: true })).toBeVisible();
 }
+
+/** From anywhere in an organisation: the header's Projects link, then the project's row. */
+export async function openProject(page: Page, projectName: string) {
+  await page.getByRole("banner").getByRole("link", { name: "Projects", exact: true }).click();
+  await page.getByRole("table").getByRole("link", { name: projectName }).click();
+  await expect(page.getByRole("navigation", { name: "Project sections" })).toBeVisible();
+}
+
+/** One of the project's section tabs: Overview, Plans, Window list, Takeoffs. */
+export async function openProjectSection(page: Page, section: "Overview" | "Plans" | "Window list" | "Takeoffs") {
+  await page.getByRole("navigation", { name: "Project sections" }).getByRole("link", { name: section, exact: true }).click();
+  await expect(page.getByRole("navigation", { name: "Project sections" }).getByRole("link", { name: section, exact: true })).toHaveAttribute("aria-current", "page");
+}
+
+/** Plans tab, then the sheet's own link in the list (its label). */
+export async function openSheetFromPlans(page: Page, label: string) {
+  await openProjectSection(page, "Plans");
+  await page.getByRole("main").getByRole("link", { name: label, exact: true }).click();
+}
+
+/** A link of the header's main navigation (Projects, Price books, Compare, Members, Settings). */
+export async function openNav(page: Page, name: string) {
+  await page.getByRole("banner").getByRole("navigation", { name: "Main" }).getByRole("link", { name, exact: true }).click();
+}

@@ -2,7 +2,11 @@
 
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import type { CountsView, OpeningTypeView, SheetView, UnitTypeView } from "@/lib/plans/api-types";
+import { countsKey, countsQuery } from "@/lib/client/counts";
+import { openingTypesQuery } from "@/lib/client/opening-types";
+import { sheetsKey, sheetsQuery } from "@/lib/client/sheets";
+import { unitTypesKey, unitTypesQuery } from "@/lib/client/unit-types";
+import type { SheetView } from "@/lib/plans/api-types";
 import { PlansApiError, plansApi, projectApi } from "@/lib/plans/window-list/request";
 
 export type SheetPatch = { label?: string; unitTypeId?: string | null };
@@ -12,20 +16,16 @@ export type SheetNotice = { text: string; current: SheetView | null };
 export function usePlansData(orgSlug: string, projectId: string) {
   const base = projectApi(orgSlug, projectId);
   const queryClient = useQueryClient();
-  const key = (what: string) => [what, orgSlug, projectId];
-  const sheets = useQuery({ queryKey: key("sheets"), queryFn: () => plansApi<{ sheets: SheetView[] }>(`${base}/sheets`) });
-  const unitTypes = useQuery({ queryKey: key("unit-types"), queryFn: () => plansApi<{ unitTypes: UnitTypeView[] }>(`${base}/unit-types`) });
-  const counts = useQuery({ queryKey: key("counts"), queryFn: () => plansApi<{ counts: CountsView }>(`${base}/counts`) });
-  const openingTypes = useQuery({
-    queryKey: key("opening-types"),
-    queryFn: () => plansApi<{ openingTypes: OpeningTypeView[] }>(`${base}/opening-types`),
-  });
+  // Keys, fetchers and cached shapes come from lib/client: the viewer reads these same entries.
+  const scope = { orgSlug, projectId };
+  const sheets = useQuery(sheetsQuery(scope));
+  const unitTypes = useQuery(unitTypesQuery(scope));
+  const counts = useQuery(countsQuery(scope));
+  const openingTypes = useQuery(openingTypesQuery(scope));
   const [notices, setNotices] = useState<Record<string, SheetNotice>>({});
 
   const putSheet = (sheet: SheetView) =>
-    queryClient.setQueryData<{ sheets: SheetView[] }>(key("sheets"), (old) =>
-      old ? { sheets: old.sheets.map((s) => (s.id === sheet.id ? sheet : s)) } : old,
-    );
+    queryClient.setQueryData(sheetsKey(scope), (old) => (old ? old.map((s) => (s.id === sheet.id ? sheet : s)) : old));
 
   /**
    * Saves a sheet's label or unit type with the version it was loaded at. Resolves to field errors to show
@@ -39,13 +39,13 @@ export function usePlansData(orgSlug: string, projectId: string) {
         body: { version: sheet.version, ...patch },
       });
       putSheet(saved);
-      if (patch.unitTypeId !== undefined) void queryClient.invalidateQueries({ queryKey: key("counts") });
+      if (patch.unitTypeId !== undefined) void queryClient.invalidateQueries({ queryKey: countsKey(scope) });
       return null;
     } catch (error) {
       if (error instanceof PlansApiError && error.status === 409 && error.current !== undefined) {
         const current = (error.current ?? null) as SheetView | null;
         if (current) putSheet(current);
-        else void queryClient.invalidateQueries({ queryKey: key("sheets") });
+        else void queryClient.invalidateQueries({ queryKey: sheetsKey(scope) });
         setNotices((n) => ({ ...n, [sheet.id]: { text: error.message, current } }));
         return null;
       }
@@ -56,11 +56,11 @@ export function usePlansData(orgSlug: string, projectId: string) {
 
   /** Unit types feed the sheets' pickers and the counts; after a change all three are re-read. */
   const unitTypesChanged = () => {
-    for (const what of ["unit-types", "counts", "sheets"]) void queryClient.invalidateQueries({ queryKey: key(what) });
+    for (const queryKey of [unitTypesKey(scope), countsKey(scope), sheetsKey(scope)]) void queryClient.invalidateQueries({ queryKey });
   };
 
   const refetch = () => {
-    for (const what of ["sheets", "counts"]) void queryClient.invalidateQueries({ queryKey: key(what) });
+    for (const queryKey of [sheetsKey(scope), countsKey(scope)]) void queryClient.invalidateQueries({ queryKey });
   };
 
   const dismiss = (sheetId: string) => setNotices(({ [sheetId]: _, ...rest }) => rest);

@@ -2,47 +2,48 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, ApiError } from "@/lib/api-client";
-import type { CountsView, OpeningTypeView, SheetView, TagView } from "@/lib/plans/api-types";
+import { countsKey, countsQuery } from "@/lib/client/counts";
+import { openingTypesQuery } from "@/lib/client/opening-types";
+import { projectPath, type ProjectScope } from "@/lib/client/project-scope";
+import { sheetKey, sheetQuery, sheetsKey, sheetsQuery } from "@/lib/client/sheets";
+import { tagsKey, tagsQuery } from "@/lib/client/tags";
+import type { SheetView } from "@/lib/plans/api-types";
+import { neighbours } from "@/lib/plans/sheet-order";
 
-/** A tag as the viewer holds it: `pending` while its POST is on the way (not yet editable). */
-export type ViewerTag = TagView & { pending?: boolean };
+export type { ViewerTag } from "@/lib/client/tags";
 
-export interface SheetScope {
-  orgSlug: string;
-  projectId: string;
+export interface SheetScope extends ProjectScope {
   sheetId: string;
 }
 
-export const projectBase = (s: SheetScope) => `/api/orgs/${s.orgSlug}/projects/${s.projectId}`;
+export const projectBase = (s: SheetScope) => projectPath(s);
 
+/** The viewer's keys, all from the resource modules the Plans page and the window list use too. */
 export const keys = {
-  sheet: (s: SheetScope) => ["sheet", s.orgSlug, s.projectId, s.sheetId] as const,
-  tags: (s: SheetScope) => ["tags", s.orgSlug, s.projectId, s.sheetId] as const,
-  openingTypes: (s: SheetScope) => ["opening-types", s.orgSlug, s.projectId] as const,
-  counts: (s: SheetScope) => ["counts", s.orgSlug, s.projectId] as const,
-  sheets: (s: SheetScope) => ["sheets", s.orgSlug, s.projectId] as const,
+  sheet: (s: SheetScope) => sheetKey(s, s.sheetId),
+  tags: (s: SheetScope) => tagsKey(s, s.sheetId),
+  counts: (s: SheetScope) => countsKey(s),
+  sheets: (s: SheetScope) => sheetsKey(s),
 };
 
 export function useSheetData(scope: SheetScope, initialSheet: SheetView) {
-  const base = projectBase(scope);
-  const sheet = useQuery({
-    queryKey: keys.sheet(scope),
-    queryFn: async () => (await api<{ sheet: SheetView }>(`${base}/sheets/${scope.sheetId}`)).sheet,
-    initialData: initialSheet,
-  });
-  const tags = useQuery({
-    queryKey: keys.tags(scope),
-    queryFn: async (): Promise<ViewerTag[]> => (await api<{ tags: TagView[] }>(`${base}/tags?sheetId=${scope.sheetId}`)).tags,
-  });
-  const openingTypes = useQuery({
-    queryKey: keys.openingTypes(scope),
-    queryFn: async () => (await api<{ openingTypes: OpeningTypeView[] }>(`${base}/opening-types`)).openingTypes,
-  });
-  const counts = useQuery({
-    queryKey: keys.counts(scope),
-    queryFn: async () => (await api<{ counts: CountsView }>(`${base}/counts`)).counts,
-  });
-  return { sheet: sheet.data, tags: tags.data ?? [], tagsLoading: tags.isPending, openingTypes: openingTypes.data ?? [], counts: counts.data };
+  const sheet = useQuery({ ...sheetQuery(scope, scope.sheetId), initialData: initialSheet });
+  const tags = useQuery(tagsQuery(scope, scope.sheetId));
+  const openingTypes = useQuery(openingTypesQuery(scope));
+  const counts = useQuery(countsQuery(scope));
+  // The project's sheets in sheet-number order, for previous / next (often already cached by the Plans page).
+  const sheets = useQuery(sheetsQuery(scope));
+  const ordered = sheets.data ?? [];
+  const around = neighbours(ordered, scope.sheetId);
+  const position = ordered.findIndex((s) => s.id === scope.sheetId);
+  return {
+    sheet: sheet.data,
+    tags: tags.data ?? [],
+    tagsLoading: tags.isPending,
+    openingTypes: openingTypes.data ?? [],
+    counts: counts.data,
+    around: { ...around, position: position < 0 ? null : position + 1, of: ordered.length },
+  };
 }
 
 export type SheetPatch =

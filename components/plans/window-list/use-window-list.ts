@@ -2,22 +2,26 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import type { CountsView, OpeningTypeView } from "@/lib/plans/api-types";
+import { countsKey, countsQuery } from "@/lib/client/counts";
+import { openingTypesKey, openingTypesQuery } from "@/lib/client/opening-types";
+import type { OpeningTypeView } from "@/lib/plans/api-types";
 import { planCellPatch, type CellEdit } from "@/lib/plans/window-list/cell-patch";
 import type { EditableColumn } from "@/lib/plans/window-list/columns";
 import { PlansApiError, plansApi, projectApi } from "@/lib/plans/window-list/request";
 import type { RowNotice, WindowListControls } from "./window-list-context";
 
-type TypesData = { openingTypes: OpeningTypeView[] };
+type TypesData = OpeningTypeView[];
 type Patch = { row: OpeningTypeView; body: unknown };
 
 /** The window list's data and every edit of it: cell patches, deletes, stale-edit recovery. */
 export function useWindowList(orgSlug: string, projectId: string, canWrite: boolean) {
   const base = projectApi(orgSlug, projectId);
   const queryClient = useQueryClient();
-  const typesKey = ["opening-types", orgSlug, projectId];
-  const types = useQuery({ queryKey: typesKey, queryFn: () => plansApi<TypesData>(`${base}/opening-types`) });
-  const counts = useQuery({ queryKey: ["counts", orgSlug, projectId], queryFn: () => plansApi<{ counts: CountsView }>(`${base}/counts`) });
+  // Keys, fetchers and cached shapes come from lib/client: the Plans page and the viewer read these same entries.
+  const scope = { orgSlug, projectId };
+  const typesKey = openingTypesKey(scope);
+  const types = useQuery(openingTypesQuery(scope));
+  const counts = useQuery(countsQuery(scope));
 
   const [editing, setEditing] = useState<WindowListControls["editing"]>(null);
   const [notices, setNotices] = useState<Record<string, RowNotice>>({});
@@ -26,10 +30,10 @@ export function useWindowList(orgSlug: string, projectId: string, canWrite: bool
 
   const putRow = (row: OpeningTypeView) =>
     queryClient.setQueryData<TypesData>(typesKey, (old) =>
-      old ? { openingTypes: old.openingTypes.map((r) => (r.id === row.id ? row : r)) } : old,
+      old ? old.map((r) => (r.id === row.id ? row : r)) : old,
     );
   const dropRow = (id: string) =>
-    queryClient.setQueryData<TypesData>(typesKey, (old) => (old ? { openingTypes: old.openingTypes.filter((r) => r.id !== id) } : old));
+    queryClient.setQueryData<TypesData>(typesKey, (old) => (old ? old.filter((r) => r.id !== id) : old));
 
   /** A 409 with `current`: someone saved first. Show their row and say so; a null `current` means it is gone. */
   const staleRow = (row: OpeningTypeView, error: PlansApiError<OpeningTypeView>) => {
@@ -51,7 +55,7 @@ export function useWindowList(orgSlug: string, projectId: string, canWrite: bool
     onSuccess: (_, row) => {
       dropRow(row.id);
       notify(row.id, null);
-      void queryClient.invalidateQueries({ queryKey: ["counts", orgSlug, projectId] });
+      void queryClient.invalidateQueries({ queryKey: countsKey(scope) });
     },
     onError: (error, row) => {
       if (error instanceof PlansApiError && error.status === 409 && error.current !== undefined) staleRow(row, error as PlansApiError<OpeningTypeView>);
@@ -93,7 +97,7 @@ export function useWindowList(orgSlug: string, projectId: string, canWrite: bool
   };
 
   const added = (row: OpeningTypeView) =>
-    queryClient.setQueryData<TypesData>(typesKey, (old) => (old ? { openingTypes: [...old.openingTypes, row] } : { openingTypes: [row] }));
+    queryClient.setQueryData<TypesData>(typesKey, (old) => (old ? [...old, row] : [row]));
 
   return { types, counts, controls, added };
 }

@@ -10,13 +10,13 @@ import { WindowListTable } from "@/components/plans/window-list/window-list-tabl
 
 export function OpeningsView({ orgSlug, projectId, canWrite }: { orgSlug: string; projectId: string; canWrite: boolean }) {
   const { types, counts, controls, added } = useWindowList(orgSlug, projectId, canWrite);
-  const job = counts.data?.counts.job;
+  const job = counts.data?.job;
   // Stable rows: TanStack Table recomputes its models whenever the array changes.
   const rows = useMemo<WindowListRow[]>(
-    () => (types.data?.openingTypes ?? []).map((t) => ({ ...t, count: job?.[t.id] ?? 0 })),
+    () => (types.data ?? []).map((t) => ({ ...t, count: job?.[t.id] ?? 0 })),
     [types.data, job],
   );
-  const total = counts.data?.counts.jobTotal;
+  const total = counts.data?.jobTotal;
 
   return (
     <div className="space-y-6">

@@ -10,7 +10,7 @@ import { usePlansData } from "@/components/plans/sheet-list/use-plans-data";
 export function PlansView({ orgSlug, projectId, canWrite }: { orgSlug: string; projectId: string; canWrite: boolean }) {
   const data = usePlansData(orgSlug, projectId);
   const { sheets, unitTypes, counts, openingTypes } = data;
-  const units = unitTypes.data?.unitTypes ?? [];
+  const units = unitTypes.data ?? [];
 
   return (
     <div className="space-y-6">
@@ -32,7 +32,7 @@ export function PlansView({ orgSlug, projectId, canWrite }: { orgSlug: string; p
             <SheetList
               orgSlug={orgSlug}
               projectId={projectId}
-              sheets={sheets.data.sheets}
+              sheets={sheets.data}
               unitTypes={units}
               canWrite={canWrite}
               notices={data.notices}
@@ -47,7 +47,7 @@ export function PlansView({ orgSlug, projectId, canWrite }: { orgSlug: string; p
         </aside>
       </div>
       {counts.isError && <Notice tone="error">Counts are unavailable: {counts.error.message}</Notice>}
-      {counts.data && openingTypes.data && <JobCountsTable counts={counts.data.counts} openingTypes={openingTypes.data.openingTypes} />}
+      {counts.data && openingTypes.data && <JobCountsTable counts={counts.data} openingTypes={openingTypes.data} />}
     </div>
   );
 }

@@ -1,6 +1,7 @@
 import { MATERIALS } from "@/takeoff";
 import type { ComparisonColumn } from "@/lib/takeoffs/compare";
 import { Card } from "@/components/ui/card";
+import { LockMark } from "@/components/ui/lock-mark";
 
 const usd = (x: number | null) => (x === null ? "—" : x.toLocaleString("en-US", { style: "currency", currency: "USD" }));
 const num = (x: number, digits = 0) => x.toLocaleString("en-US", { maximumFractionDigits: digits, minimumFractionDigits: digits });
@@ -37,7 +38,12 @@ export function ComparisonTable({ columns, reasons }: { columns: ComparisonColum
                   {c.name}
                   <span className="block text-xs font-normal text-graphite-600">
                     {c.projectName}
-                    {c.status === "submitted" ? " · 🔒 submitted" : ""}
+                    {c.status === "submitted" && (
+                      <>
+                        {" · "}
+                        <LockMark /> submitted
+                      </>
+                    )}
                   </span>
                 </th>
               ))}

@@ -1,3 +1,5 @@
+import { LockMark } from "@/components/ui/lock-mark";
+
 /** A plain GET form: the choice lives in the URL, so a comparison can be bookmarked and shared with the team. */
 export function TakeoffPicker({
   takeoffs,
@@ -20,7 +22,9 @@ export function TakeoffPicker({
                 <label className="flex items-center gap-2 text-sm">
                   <input type="checkbox" name="ids" value={t.id} defaultChecked={selected.includes(t.id)} />
                   <span className="font-medium">{t.name}</span>
-                  {t.status === "submitted" && <span className="text-xs text-brass-700">🔒 submitted</span>}
+                  {t.status === "submitted" && <span className="text-xs text-brass-700">
+                      <LockMark /> submitted
+                    </span>}
                   <span className="text-xs text-graphite-600">{new Date(t.createdAt).toLocaleDateString("en-US")}</span>
                 </label>
               </li>

@@ -13,7 +13,7 @@ export function NavLinks({ orgSlug }: { orgSlug: string }) {
     { href: `/${orgSlug}/settings`, label: "Settings" },
   ];
   return (
-    <nav className="flex gap-1 text-sm">
+    <nav aria-label="Main" className="flex gap-1 text-sm">
       {links.map((l) => {
         const active = path.startsWith(l.href);
         return (

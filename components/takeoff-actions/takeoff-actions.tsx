@@ -4,6 +4,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
+import { LockMark } from "@/components/ui/lock-mark";
 import { api } from "@/lib/api-client";
 import { SendBidForm } from "./send-bid-form";
 
@@ -35,7 +36,7 @@ export function TakeoffActions({ orgSlug, projectId, takeoffId, status, canSubmi
   const error = submit.error ?? copy.error;
 
   return (
-    <Card title="Bid documents" actions={status === "submitted" ? <span className="text-sm font-semibold text-brass-700">🔒 Submitted bid — locked</span> : null}>
+    <Card title="Bid documents" actions={status === "submitted" ? <span className="text-sm font-semibold text-brass-700"><LockMark /> Submitted bid — locked</span> : null}>
       <div className="space-y-4 print:hidden">
         {error && <Notice tone="error">{error.message}</Notice>}
         <div className="flex flex-wrap gap-2">

@@ -21,8 +21,8 @@ export function BoardOrderTable({ orders }: { orders: BoardOrder[] }) {
             <th scope="col" className={TH}>Item</th>
             <th scope="col" className={TH}>Supplier code</th>
             <th scope="col" className={`${TH} text-right`}>Stock length</th>
-            <th scope="col" className={`${TH} text-right`}>Optimised</th>
-            <th scope="col" className={`${TH} text-right`}>To buy</th>
+            <th scope="col" className={`${TH} text-right`} title="Boards the cutting plan uses, before the waste allowance">In cutting plan</th>
+            <th scope="col" className={`${TH} text-right`} title="Cutting plan plus the waste allowance">To buy</th>
             <th scope="col" className={`${TH} text-right`}>Each</th>
             <th scope="col" className={`${TH} text-right`}>Amount</th>
           </tr>

@@ -1,4 +1,4 @@
-import { count, feet, percent, ratioPercent, usd } from "@/lib/takeoffs/format";
+import { count, feet, ratioPercent, usd } from "@/lib/takeoffs/format";
 import { MATERIAL_LABELS } from "@/lib/takeoffs/labels";
 import type { TakeoffResult } from "@/lib/takeoffs/types";
 
@@ -10,7 +10,7 @@ export function JobMaterials({ result }: { result: TakeoffResult }) {
   const rows = result.materials;
   const cost = rows.reduce((t, m) => t + m.cost, 0);
   const bound = rows.reduce((t, m) => t + m.lowerBound, 0);
-  const gap = bound > 0 ? ((cost - bound) / bound) * 100 : 0;
+  const over = Math.max(0, cost - bound);
   return (
     <div className="space-y-2">
       <div className="relative overflow-x-auto rounded-lg border border-maple-200 bg-white">
@@ -25,7 +25,7 @@ export function JobMaterials({ result }: { result: TakeoffResult }) {
               <th scope="col" className={TH}>Ft bought</th>
               <th scope="col" className={TH}>Offcut &amp; kerf ft</th>
               <th scope="col" className={TH}>Yield</th>
-              <th scope="col" className={TH}>Gap to bound</th>
+              <th scope="col" className={TH} title="Most this order could cost more than the cheapest possible cutting plan">At most over cheapest</th>
               <th scope="col" className={TH}>Allowance boards</th>
               <th scope="col" className={TH}>Cost</th>
             </tr>
@@ -44,7 +44,7 @@ export function JobMaterials({ result }: { result: TakeoffResult }) {
                   <td className={TD}>{feet(m.purchasedFeet)}</td>
                   <td className={TD}>{feet(m.offcutFeet)}</td>
                   <td className={TD}>{ratioPercent(m.yield)}</td>
-                  <td className={TD}>{percent(m.gapPercent)}</td>
+                  <td className={TD}>{m.cost - m.lowerBound > 0.005 ? usd(m.cost - m.lowerBound) : "cheapest"}</td>
                   <td className={TD}>{count(m.allowanceBoards)}</td>
                   <td className={`${TD} font-semibold`}>{usd(m.cost + m.allowanceCost)}</td>
                 </tr>
@@ -54,8 +54,8 @@ export function JobMaterials({ result }: { result: TakeoffResult }) {
         </table>
       </div>
       <p className="text-xs text-graphite-600">
-        Yield is length cut ÷ length bought in the optimised plan. Gap to bound: the plan&apos;s cost is within {percent(gap)} of a proven lower bound on
-        any cutting plan (per material in the column). Cost includes the waste-allowance boards.
+        Yield is length cut ÷ length bought in the cutting plan. {over > 0.005 ? <>Before the waste allowance, these boards cost at most {usd(over)} more than the cheapest possible way to cut these pieces: no arrangement of cuts buys them for less than {usd(bound)}.</> : "No arrangement of cuts buys these pieces for less."}{" "}
+        Cost includes the waste-allowance boards.
       </p>
     </div>
   );

@@ -1,8 +1,10 @@
 import { cache } from "react";
+import { headers } from "next/headers";
 import { notFound, redirect } from "next/navigation";
 import { getOrgContext } from "@/db/queries/memberships";
 import { getUserById } from "@/db/queries/users";
 import { can, type Permission } from "@/lib/permissions";
+import { REQUEST_PATH_HEADER, safeReturnPath } from "./return-to";
 import { currentUserId } from "./session";
 
 /** Signed-in user for a server page, or a redirect to sign-in that comes back here. */
@@ -13,9 +15,14 @@ export const requireUser = cache(async (returnTo: string) => {
   return user;
 });
 
+/** The page this request asked for (set by proxy.ts), so sign-in can bring a deep link back to it. */
+async function requestedPath(fallback: string) {
+  return safeReturnPath((await headers()).get(REQUEST_PATH_HEADER), fallback);
+}
+
 /** The caller's membership for an org page; a slug they don't belong to is a 404, like one that doesn't exist. */
 export const requireOrg = cache(async (orgSlug: string) => {
-  const user = await requireUser(`/${orgSlug}`);
+  const user = await requireUser(await requestedPath(`/${orgSlug}`));
   const org = await getOrgContext(user.id, orgSlug);
   if (!org) notFound();
   return {

@@ -1,4 +1,5 @@
 import { expect, type Page } from "@playwright/test";
+import { openNav } from "./helpers";
 import { db } from "@/db/client";
 import { memberships, users } from "@/db/schema";
 import { createOpeningType } from "@/db/queries/opening-types";
@@ -12,6 +13,8 @@ import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";
 import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
 import { inspectPdf } from "@/lib/pdf/inspect";
+import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
+import { UTApi, UTFile } from "uploadthing/server";
 
 /**
  * The state a bid starts from, set up directly (the plans and sign-up screens have their own tests):
@@ -33,7 +36,11 @@ export async function seedBidWorld(id: string) {
   const scope = { orgId: organisation.id, projectId: project.id, userId: admin.id };
 
   const { bytes, sheets: drawn } = await generatePlanSet({ unitTypes: ["A", "B"] });
-  await createPlanSet(scope, { key: `bids-${id}`, name: "set.pdf", size: bytes.byteLength }, (await inspectPdf(bytes)).pages);
+  // Stored through the upload service like a real upload, so the sheets open in the viewer.
+  useLocalUploadStandInUnlessConfigured();
+  const [stored] = await new UTApi().uploadFiles([new UTFile([Buffer.from(bytes)], "set.pdf", { type: "application/pdf" })]);
+  if (!stored?.data) throw new Error(`could not store the plan set: ${stored?.error?.message ?? "no answer"}`);
+  await createPlanSet(scope, { key: stored.data.key, name: "set.pdf", size: bytes.byteLength }, (await inspectPdf(bytes)).pages);
   const units = { "Type A": (await createUnitType(scope, { name: "Type A", count: 12 })).id, "Type B": (await createUnitType(scope, { name: "Type B", count: 8 })).id } as Record<string, string>;
   const types = new Map<string, string>();
   for (const [mark, size] of Object.entries(DEMO_WINDOW_TYPES) as [WindowMark, (typeof DEMO_WINDOW_TYPES)[WindowMark]][]) {
@@ -57,9 +64,9 @@ export async function seedBidWorld(id: string) {
     admin,
     estimator,
     manager,
-    /** The admin opens the price book and changes the 12' price of the FJ pine 2 1/2 casing. */
+    /** The admin opens the price book from the header and changes the 12' price of the FJ pine 2 1/2 casing. */
     async editPriceThroughUi(page: Page) {
-      await page.goto(`/${organisation.slug}/price-books`);
+      await openNav(page, "Price books");
       await page.getByRole("link", { name: /Alder Bend Millwork/ }).click();
       const cell = page.getByRole("button", { name: /^12' price of Casing 2 1\/2 colonial — FJ pine: .*Edit$/ });
       await cell.click();

@@ -6,7 +6,7 @@
 import { readFile } from "node:fs/promises";
 import { expect, test, type Page } from "@playwright/test";
 import { seedBidWorld } from "./bid-world";
-import { runId, signIn, signOut } from "./helpers";
+import { openNav, openProject, openProjectSection, runId, signIn, signOut } from "./helpers";
 
 const id = runId();
 
@@ -17,8 +17,9 @@ async function pdfText(path: string) {
   return content.items.map((i) => ("str" in i ? i.str : "")).join(" ");
 }
 
-async function runTakeoff(page: Page, base: string, name: string, casing: RegExp | null) {
-  await page.goto(`${base}/takeoffs`);
+/** From inside the project: the Takeoffs tab, then the run form. */
+async function runTakeoff(page: Page, name: string, casing: RegExp | null) {
+  await openProjectSection(page, "Takeoffs");
   await page.getByLabel("Name", { exact: true }).fill(name);
   if (casing) {
     const select = page.getByLabel("Alternate casing (optional)");
@@ -34,7 +35,6 @@ async function runTakeoff(page: Page, base: string, name: string, casing: RegExp
 test("price change, two takeoffs, compare, lock, documents, send", async ({ page }) => {
   test.setTimeout(300_000);
   const world = await seedBidWorld(id);
-  const base = `/${world.orgSlug}/projects/${world.projectId}`;
 
   await test.step("the admin changes a price in the price book", async () => {
     await signIn(page, world.admin.email, world.password);
@@ -48,25 +48,32 @@ test("price change, two takeoffs, compare, lock, documents, send", async ({ page
   await test.step("the estimator runs a base bid and an alternate in poplar casing", async () => {
     await signIn(page, world.estimator.email, world.password);
     await expect(page).toHaveURL(/\/projects$/);
-    baseId = await runTakeoff(page, base, "Base bid", null);
-    altId = await runTakeoff(page, base, "Alternate — poplar casing", /poplar/i);
+    await openProject(page, world.projectName);
+    baseId = await runTakeoff(page, "Base bid", null);
+    altId = await runTakeoff(page, "Alternate — poplar casing", /poplar/i);
     await signOut(page);
   });
 
   await test.step("the project manager compares them and sees why they differ", async () => {
     await signIn(page, world.manager.email, world.password);
     await expect(page).toHaveURL(/\/projects$/);
-    await page.goto(`/${world.orgSlug}/compare?ids=${baseId},${altId}`);
+    await openNav(page, "Compare");
+    for (const name of ["Base bid", "Alternate — poplar casing"]) await page.getByRole("checkbox", { name: new RegExp(`^${name}`) }).check();
+    await page.getByRole("button", { name: "Compare", exact: true }).click();
+    await expect(page).toHaveURL(new RegExp(`ids=${baseId}.*ids=${altId}|ids=${altId}.*ids=${baseId}`));
     await expect(page.getByRole("heading", { name: "Side by side" })).toBeVisible();
     await expect(page.getByText(/Alternate casing: each window's own → .*poplar/i)).toBeVisible();
     await expect(page.getByRole("row", { name: /Bid total/ })).toContainText("▲");
   });
 
   await test.step("marks the base bid as submitted, which locks it", async () => {
-    await page.goto(`${base}/takeoffs/${baseId}`);
+    await openProject(page, world.projectName);
+    await openProjectSection(page, "Takeoffs");
+    await page.getByRole("main").getByRole("link", { name: "Base bid", exact: true }).click();
+    await expect(page).toHaveURL(new RegExp(`/takeoffs/${baseId}$`));
     page.once("dialog", (d) => void d.accept());
     await page.getByRole("button", { name: "Mark as submitted bid" }).click();
-    await expect(page.getByText("🔒 Submitted bid — locked")).toBeVisible();
+    await expect(page.getByText("Submitted bid — locked")).toBeVisible();
     const rename = await page.request.patch(`/api/orgs/${world.orgSlug}/projects/${world.projectId}/takeoffs/${baseId}`, { data: { name: "Changed" } });
     expect(rename.status()).toBe(403); // a project manager never renames; estimators get 409 "locked" (integration tests)
   });

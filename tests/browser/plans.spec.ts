@@ -5,7 +5,7 @@
  */
 import { expect, test, type Page } from "@playwright/test";
 import { generatePlanSet } from "@/lib/plans/demo-plan";
-import { runId } from "./helpers";
+import { openProjectSection, openSheetFromPlans, runId } from "./helpers";
 
 const id = runId();
 const owner = { name: "Odile Fenn", email: `odile.${id}@alderbend-trim.test`, password: "stool-horn-4444" };
@@ -30,33 +30,37 @@ test("upload, calibrate, tag four openings of two types, count, reload", async (
   const slug = await signUp(page);
   const api = (path: string) => `/api/orgs/${slug}/${path}`;
 
-  const created = await page.request.post(api("projects"), { data: { name: `Larkspur Commons ${id}` } });
-  const projectId = (await created.json()).project.id as string;
-  const base = `/${slug}/projects/${projectId}`;
+  const projectName = `Larkspur Commons ${id}`;
+  await page.getByLabel("Project name").fill(projectName);
+  await page.getByRole("button", { name: "Create project" }).click();
+  await page.getByRole("table").getByRole("link", { name: projectName }).click();
+  await expect(page.getByRole("navigation", { name: "Project sections" })).toBeVisible();
+  const projectId = new URL(page.url()).pathname.split("/").pop()!;
   for (const ot of [
     { mark: "W1", width: "3'-0\"", height: "5'-0\"", setback: "1 7/16" },
     { mark: "W2", width: "2'-6\"", height: "4'-0\"", setback: "1 7/16" },
   ]) {
     expect((await page.request.post(api(`projects/${projectId}/opening-types`), { data: ot })).status()).toBe(201);
   }
-  const unitType = await (await page.request.post(api(`projects/${projectId}/unit-types`), { data: { name: "Type A", count: 12 } })).json();
+  expect((await page.request.post(api(`projects/${projectId}/unit-types`), { data: { name: "Type A", count: 12 } })).status()).toBe(201);
 
   await test.step("upload a generated plan set; the server reads it and makes one sheet per page", async () => {
     const { bytes } = await generatePlanSet({ unitTypes: ["A"] });
-    await page.goto(`${base}/plans`);
+    await openProjectSection(page, "Plans");
     await page.locator('input[type="file"]').setInputFiles({ name: "Larkspur-C.pdf", mimeType: "application/pdf", buffer: Buffer.from(bytes) });
     await expect(page.getByText("2 sheets added.")).toBeVisible({ timeout: 60_000 });
     await expect(page.getByText("A-101", { exact: true })).toBeVisible();
     await expect(page.getByText("A-201", { exact: true })).toBeVisible();
   });
 
-  const sheets = (await (await page.request.get(api(`projects/${projectId}/sheets`))).json()).sheets as { id: string; label: string; version: number }[];
-  const sheet = sheets.find((s) => s.label === "A-201")!;
-  await page.request.patch(api(`projects/${projectId}/sheets/${sheet.id}`), { data: { version: sheet.version, unitTypeId: unitType.unitType.id } });
+  await test.step("mark A-201 as a Type A plan on the Plans page", async () => {
+    await page.getByLabel("Unit type of A-201").selectOption({ label: "Type A (× 12)" });
+    await expect(page.getByLabel("Unit type of A-201")).toHaveValue(/[0-9a-f-]{36}/);
+  });
 
   const surface = page.getByRole("application", { name: "Sheet drawing" });
   await test.step("calibrate from a dimension of known length", async () => {
-    await page.goto(`${base}/sheets/${sheet.id}`);
+    await openSheetFromPlans(page, "A-201");
     await expect(page.locator("[data-sheet-page] canvas").first()).toBeVisible({ timeout: 60_000 });
     await page.getByRole("toolbar", { name: "Sheet tools" }).getByRole("button", { name: /^Calibrate/ }).click();
     const box = (await surface.boundingBox())!;
@@ -64,7 +68,7 @@ test("upload, calibrate, tag four openings of two types, count, reload", async (
     await surface.click({ position: { x: box.width * 0.7, y: box.height * 0.6 } });
     await page.getByLabel(/Known length between the points/).fill(`30'-0"`);
     await page.getByRole("button", { name: "Save", exact: true }).click();
-    await expect(page.getByText("picked points", { exact: true })).toBeVisible();
+    await expect(page.getByText("two picked points", { exact: true })).toBeVisible();
   });
 
   await test.step("tag two W1 and two W2", async () => {
@@ -91,7 +95,7 @@ test("upload, calibrate, tag four openings of two types, count, reload", async (
     await page.reload();
     await expect(page.locator("[data-sheet-page] canvas").first()).toBeVisible({ timeout: 60_000 });
     await expect(page.getByRole("button", { name: /^Tag W\d$/ })).toHaveCount(4);
-    await expect(page.getByText("picked points", { exact: true })).toBeVisible();
+    await expect(page.getByText("two picked points", { exact: true })).toBeVisible();
     const after = await chipBoxes(page);
     expect(after.map((c) => c.label).sort()).toEqual(before.map((c) => c.label).sort());
     for (const b of before) {

@@ -177,10 +177,11 @@ test("owner invites an estimator and a project manager; each sees only what the 
     expect(other.status()).toBe(201);
     const otherSlug: string = (await other.json()).organisation.slug;
 
+    // Typed or pasted addresses, on purpose: the one place a person does not arrive by a link.
     for (const target of ["no-such-org-xyz", otherSlug]) {
       const res = await page.goto(`/${target}/projects`);
       expect(res?.status()).toBe(404);
-      await expect(page.getByText("This page could not be found.")).toBeVisible();
+      await expect(page.getByRole("heading", { name: "Nothing here" })).toBeVisible();
       expect((await page.request.get(`/api/orgs/${target}/projects`)).status()).toBe(404);
     }
     expect(dialogs).toEqual([]);

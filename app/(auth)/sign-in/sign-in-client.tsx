@@ -23,11 +23,12 @@ export function SignInForm({ next, joined }: { next: string; joined: boolean }) 
       password: String(form.get("password")),
       redirect: false,
     });
-    setBusy(false);
     if (!res || res.error) {
+      setBusy(false);
       setError(res?.error && res.error !== "CredentialsSignin" ? res.error : "Wrong e-mail or password.");
       return;
     }
+    // The button keeps saying "Signing in…" until the next page (or its loading state) replaces this one.
     router.push(next);
     router.refresh();
   }

@@ -28,6 +28,8 @@ interface Props {
 }
 
 const feet = (inches: number) => formatLength(inches, { style: "feet-inches" });
+/** PDF user-space units are 1/72 in of paper times the page's UserUnit (ISO 32000-1, 8.3.2.3 and 14.11.2). */
+const paperInches = (units: number, userUnit: number) => ((units * userUnit) / 72).toFixed(2);
 
 export function CalibrationPanel({ sheet, canWrite, tool, picks, setTool, save, saving }: Props) {
   const [scaleId, setScaleId] = useState("");
@@ -54,12 +56,22 @@ export function CalibrationPanel({ sheet, canWrite, tool, picks, setTool, save, 
         Calibration
       </h3>
       <dl className="grid grid-cols-[5.5rem_1fr] gap-y-0.5 text-xs">
-        <dt className="text-graphite-600">Scale</dt>
-        <dd>{sheet.scaleLabel ?? "none chosen"}</dd>
-        <dt className="text-graphite-600">Points</dt>
-        <dd>{sheet.calibrationPoints ? `${feet(sheet.calibrationPoints.inches)} between two picked points` : "none picked"}</dd>
-        <dt className="text-graphite-600">In effect</dt>
-        <dd className="font-medium">{!calibrated ? "not calibrated" : pointsInEffect ? "picked points" : "chosen scale"}</dd>
+        <dt className="text-graphite-600">Scale from</dt>
+        <dd className="font-medium">
+          {!calibrated ? "nothing yet: not calibrated" : pointsInEffect ? "two picked points" : `the standard scale ${sheet.scaleLabel ?? ""}`}
+        </dd>
+        {sheet.calibrationPoints && (
+          <>
+            <dt className="text-graphite-600">Points</dt>
+            <dd>{feet(sheet.calibrationPoints.inches)} apart in real life</dd>
+          </>
+        )}
+        {pointsInEffect && sheet.scaleLabel && (
+          <>
+            <dt className="text-graphite-600">Check against</dt>
+            <dd>the standard scale {sheet.scaleLabel}</dd>
+          </>
+        )}
       </dl>
       {sheet.scaleMismatchPercent !== null && <ScaleWarning percent={sheet.scaleMismatchPercent} />}
       {!calibrated && <p className="text-xs text-graphite-700">Until the sheet is calibrated, measuring and width checks are off.</p>}
@@ -69,7 +81,7 @@ export function CalibrationPanel({ sheet, canWrite, tool, picks, setTool, save, 
           {a && b ? (
             <LengthForm
               id="cal-length"
-              label={`Known length between the points (${distance(a, b).toFixed(0)} PDF units apart)`}
+              label={`Known length between the points (${paperInches(distance(a, b), sheet.userUnit)} in apart on paper)`}
               submit="Save"
               busy={saving}
               onSubmit={(text) => void savePoints(text)}

@@ -21,7 +21,9 @@ const OPTIONS = { isEvalSupported: false, disableAutoFetch: true };
 // so the bitmap is CSS-stretched to the live zoom. (A plain style rule: it must beat those inline styles.)
 const FILL_CSS =
   "[data-sheet-page] .react-pdf__Page{position:absolute!important;inset:0;min-width:0!important;min-height:0!important}" +
-  "[data-sheet-page] canvas{position:absolute;inset:0;width:100%!important;height:100%!important}";
+  "[data-sheet-page] canvas{position:absolute;inset:0;width:100%!important;height:100%!important}" +
+  // pdf.js paints a fresh canvas white first and then draws it in slices: one still being drawn stays unseen.
+  "[data-sheet-page] .sheet-layer-pending{visibility:hidden}";
 
 export interface PdfPageLayerProps {
   file: { orgSlug: string; projectId: string; planSetId: string };
@@ -42,7 +44,8 @@ export interface PdfPageLayerProps {
 
 export default function PdfPageLayer(props: PdfPageLayerProps) {
   const { file, pageNumber, rotation, view, pageSize, baseScale, detail, dpr, page, onPage, onError } = props;
-  // Double buffer: the bitmap on screen stays (CSS-scaled) until the one at the new scale has finished.
+  // Double buffer: the bitmap on screen stays (CSS-scaled) until the one at the new scale has finished; the new
+  // one is drawn hidden beside it and only then takes its place.
   const [shown, setShown] = useState<number | null>(null);
   const layers = baseScale === null ? [] : shown === null || shown === baseScale ? [baseScale] : [shown, baseScale];
   const box = view ? { left: view.x, top: view.y, width: pageSize.width * view.zoom, height: pageSize.height * view.zoom } : { display: "none" };
@@ -55,6 +58,7 @@ export default function PdfPageLayer(props: PdfPageLayerProps) {
         {layers.map((scale) => (
           <Page
             key={scale}
+            className={shown !== null && scale !== shown ? "sheet-layer-pending" : undefined}
             pageNumber={pageNumber}
             scale={scale}
             rotate={rotation}

@@ -11,6 +11,7 @@ import { CountsPanel } from "./counts-panel";
 import { MeasureReadout } from "./measure-readout";
 import { NoticeBar, type Notice } from "./notice-bar";
 import { OverlayLayer } from "./overlay-layer";
+import { SheetPager } from "./sheet-pager";
 import { ShortcutsHelp } from "./shortcuts-help";
 import { TagLayer } from "./tag-layer";
 import { TagPanel } from "./tag-panel";
@@ -119,15 +120,22 @@ export function SheetViewer({ scope, initialSheet, canWrite, plansHref }: { scop
           : "relative left-1/2 flex h-[calc(100dvh-14.5rem)] min-h-[30rem] w-[calc(100vw-2rem)] max-w-[1800px] -translate-x-1/2 flex-col overflow-hidden rounded-lg border border-maple-200 bg-white"
       }
     >
-      <header className="flex flex-wrap items-baseline gap-x-3 border-b border-maple-200 px-3 py-1.5">
-        <a href={plansHref} className="text-xs text-spruce-700 underline">
-          ← All sheets
-        </a>
+      <header className="flex flex-wrap items-center gap-x-3 gap-y-1 border-b border-maple-200 px-3 py-1.5">
         <h1 className="text-base font-bold">{sheet.label}</h1>
-        <p className="text-xs text-graphite-600">
+        <p className="min-w-0 truncate text-xs text-graphite-600">
           {sheet.planSetName} · page {sheet.pageNumber}
           {!canWrite && " · read-only: your role can view and measure"}
         </p>
+        <div className="ml-auto">
+          <SheetPager
+            plansHref={plansHref}
+            sheetHref={(id) => plansHref.replace(/\/plans$/, `/sheets/${id}`)}
+            previous={data.around.previous}
+            next={data.around.next}
+            position={data.around.position}
+            of={data.around.of}
+          />
+        </div>
       </header>
       <Toolbar
         tool={tools.tool}

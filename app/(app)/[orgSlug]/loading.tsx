@@ -1,0 +1,5 @@
+import { LoadingState } from "@/components/shell/page-state";
+
+export default function OrgLoading() {
+  return <LoadingState />;
+}

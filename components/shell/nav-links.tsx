@@ -13,7 +13,7 @@ export function NavLinks({ orgSlug }: { orgSlug: string }) {
     { href: `/${orgSlug}/settings`, label: "Settings" },
   ];
   return (
-    <nav aria-label="Main" className="flex gap-1 text-sm">
+    <nav aria-label="Main" className="order-last -mx-1 flex w-full gap-1 overflow-x-auto px-1 text-sm whitespace-nowrap xl:order-none xl:mx-0 xl:w-auto xl:px-0">
       {links.map((l) => {
         const active = path.startsWith(l.href);
         return (
@@ -21,7 +21,7 @@ export function NavLinks({ orgSlug }: { orgSlug: string }) {
             key={l.href}
             href={l.href}
             aria-current={active ? "page" : undefined}
-            className={`rounded-md px-3 py-1.5 font-medium ${active ? "bg-maple-50 text-spruce-800" : "hover:bg-spruce-700"}`}
+            className={`shrink-0 rounded-md px-2.5 py-1.5 font-medium ${active ? "bg-maple-50 text-spruce-800" : "hover:bg-spruce-700"}`}
           >
             {l.label}
           </Link>

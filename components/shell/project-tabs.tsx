@@ -13,13 +13,13 @@ export function ProjectTabs({ base }: { base: string }) {
     { href: `${base}/takeoffs`, label: "Takeoffs", active: path.startsWith(`${base}/takeoffs`) },
   ];
   return (
-    <nav className="flex gap-1 border-b border-maple-200" aria-label="Project sections">
+    <nav className="flex gap-1 overflow-x-auto border-b border-maple-200 whitespace-nowrap" aria-label="Project sections">
       {tabs.map((t) => (
         <Link
           key={t.href}
           href={t.href}
           aria-current={t.active ? "page" : undefined}
-          className={`-mb-px border-b-2 px-3 py-2 text-sm font-medium ${
+          className={`-mb-px shrink-0 border-b-2 px-3 py-2 text-sm font-medium ${
             t.active ? "border-brass-500 text-graphite-900" : "border-transparent text-graphite-600 hover:text-graphite-900"
           }`}
         >

@@ -115,4 +115,8 @@ test("a page that is not there says so in the app's own words, with a way back",
   await expect(page.getByText("This page could not be found.")).toHaveCount(0); // the framework's own page
   await page.getByRole("link", { name: "Go to your projects" }).click();
   await expect(page).toHaveURL(`/${world.orgSlug}/projects`);
+  // The sheet page shows a loading state while it opens; an unknown sheet must still answer 404, not 200.
+  const sheet = await page.goto(`/${world.orgSlug}/projects/${world.projectId}/sheets/00000000-0000-4000-8000-000000000000`);
+  expect(sheet?.status()).toBe(404);
+  await expect(page.getByRole("heading", { name: "Nothing here" })).toBeVisible();
 });

@@ -47,6 +47,8 @@ export function SheetViewer({ scope, initialSheet, canWrite, plansHref }: { scop
   const [loadError, setLoadError] = useState<string | null>(null);
   const [fullWindow, setFullWindow] = useState(false);
   const [helpOpen, setHelpOpen] = useState(false);
+  // The side panel folds away to give the drawing the whole width (a tablet has little to spare).
+  const [panelOpen, setPanelOpen] = useState(true);
   const dpr = useDevicePixelRatio();
   const rotation = sheet.rotation;
 
@@ -152,6 +154,8 @@ export function SheetViewer({ scope, initialSheet, canWrite, plansHref }: { scop
         fullWindow={fullWindow}
         toggleFullWindow={() => setFullWindow((f) => !f)}
         showHelp={() => setHelpOpen(true)}
+        panelOpen={panelOpen}
+        togglePanel={() => setPanelOpen((o) => !o)}
       />
       <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
         <div className="relative flex min-h-0 flex-1 flex-col">
@@ -174,7 +178,7 @@ export function SheetViewer({ scope, initialSheet, canWrite, plansHref }: { scop
           >
             {vp && (
               <>
-                <TagLayer vp={vp} tags={data.tags} types={data.openingTypes} selectedId={tools.selectedId} dragging={tools.dragging} interactive={interactiveTags} onSelect={tools.setSelectedId} />
+                <TagLayer vp={vp} zoom={view?.zoom ?? 1} tags={data.tags} types={data.openingTypes} selectedId={tools.selectedId} dragging={tools.dragging} interactive={interactiveTags} onSelect={tools.setSelectedId} />
                 <OverlayLayer vp={vp} tool={tools.tool} picks={tools.picks} hover={tools.hover} shift={keys.shift} inchesPerUnit={ipu} saved={sheet.calibrationPoints} measurement={tools.measurement} />
               </>
             )}
@@ -185,7 +189,7 @@ export function SheetViewer({ scope, initialSheet, canWrite, plansHref }: { scop
             {tools.tool === "tag" && activeType && <strong> Placing {activeType.mark}.</strong>}
           </p>
         </div>
-        <aside className="max-h-[40%] w-full space-y-4 overflow-y-auto border-t border-maple-200 bg-maple-50 p-3 lg:max-h-none lg:w-76 lg:border-t-0 lg:border-l">
+        <aside id="sheet-side-panel" hidden={!panelOpen} aria-label="Sheet details" className="max-h-[40%] w-full space-y-4 overflow-y-auto border-t border-maple-200 bg-maple-50 p-3 lg:max-h-none lg:w-76 lg:border-t-0 lg:border-l">
           <MeasureReadout measurement={tools.tool === "measure" ? tools.measurement : null} live={liveMeasure} inchesPerUnit={ipu} />
           <CalibrationPanel sheet={sheet} canWrite={canWrite} tool={tools.tool} picks={tools.picks} setTool={tools.setTool} save={save} saving={saveSheet.isPending} />
           <TagPanel

@@ -13,6 +13,8 @@ interface Props {
   pending: boolean;
   widthMismatch: boolean;
   interactive: boolean;
+  /** Zoomed far out: a smaller chip with a smaller mark, so it does not cover the window it marks. */
+  compact: boolean;
   onSelect: (id: string) => void;
 }
 
@@ -22,7 +24,7 @@ interface Props {
  * A measured width that disagrees with the type gets a notched "≠" badge at the corner, so the flag does not
  * rely on colour. Screen-sized at every zoom.
  */
-export const TagChip = memo(function TagChip({ id, mark, tint, x, y, selected, pending, widthMismatch, interactive, onSelect }: Props) {
+export const TagChip = memo(function TagChip({ id, mark, tint, x, y, selected, pending, widthMismatch, interactive, compact, onSelect }: Props) {
   return (
     <button
       type="button"
@@ -34,7 +36,10 @@ export const TagChip = memo(function TagChip({ id, mark, tint, x, y, selected, p
         // Pointer clicks are handled by the viewer's gestures; this is for Enter/Space on a focused chip.
         if (e.detail === 0) onSelect(id);
       }}
-      className={`absolute flex h-5 min-w-7 -translate-x-1/2 -translate-y-1/2 items-center justify-center rounded-[5px] border px-1.5 text-[11px] leading-none font-bold tracking-tight whitespace-nowrap shadow-[0_0_0_1.5px_white] select-none ${
+      data-compact={compact || undefined}
+      className={`absolute flex -translate-x-1/2 -translate-y-1/2 items-center justify-center border leading-none font-bold tracking-tight whitespace-nowrap shadow-[0_0_0_1.5px_white] select-none ${
+        compact ? "h-3 min-w-3.5 rounded-[3px] px-0.5 text-[7px]" : "h-5 min-w-7 rounded-[5px] px-1.5 text-[11px]"
+      } ${
         selected ? "z-10 scale-125 border-graphite-900 outline-2 outline-offset-[3px] outline-graphite-900" : "border-graphite-900/60"
       } ${pending ? "border-dashed opacity-70" : ""} ${interactive && !pending ? "pointer-events-auto cursor-grab touch-none" : "pointer-events-none"}`}
       style={{ left: x, top: y, backgroundColor: tint.fill, color: tint.text }}
@@ -43,7 +48,9 @@ export const TagChip = memo(function TagChip({ id, mark, tint, x, y, selected, p
       {widthMismatch && (
         <span
           aria-hidden
-          className="absolute -top-2.5 -right-2.5 flex h-4 w-4 items-center justify-center rounded-sm border border-graphite-900 bg-white text-[10px] font-bold text-graphite-900 shadow-[0_0_0_1px_white]"
+          className={`absolute flex items-center justify-center rounded-sm border border-graphite-900 bg-white font-bold text-graphite-900 shadow-[0_0_0_1px_white] ${
+            compact ? "-top-1.5 -right-1.5 h-2.5 w-2.5 text-[6px]" : "-top-2.5 -right-2.5 h-4 w-4 text-[10px]"
+          }`}
           style={{ clipPath: "polygon(0 0, 100% 0, 100% 100%, 30% 100%, 0 70%)" }}
         >
           ≠

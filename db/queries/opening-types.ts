@@ -7,7 +7,9 @@ import { FALLBACK_TRIM_SPEC } from "@/lib/plans/default-trim";
 import type { OpeningTypeView } from "@/lib/plans/api-types";
 import type { OpeningTypeCreateInput, OpeningTypeUpdateInput } from "@/lib/validators/plans";
 import { trimSpecSchema, wallSetback, type TrimSpec, type WallBuildUp } from "@/takeoff";
+import { getCounts } from "./counts";
 import { assertProject, type ProjectScope } from "./project-scope";
+import { requireConfirmed } from "./removal-impact";
 
 const fields = {
   id: openingTypes.id,
@@ -113,20 +115,28 @@ export async function updateOpeningType(s: ProjectScope, id: string, input: Open
   }
 }
 
-export async function deleteOpeningType(s: ProjectScope, id: string, version: number) {
+/**
+ * Deletes an opening type and, once the person confirmed how many, the tags of that type with it (one
+ * transaction). Without that confirmation a type in use is refused with what it would take.
+ */
+export async function deleteOpeningType(s: ProjectScope, id: string, version: number, confirmedTags?: number) {
   const current = await getOpeningType(s, id);
   if (current.version !== version) throw stale(current);
-  const [used] = await db.select({ n: sql<number>`count(*)::int` }).from(tags).where(eq(tags.openingTypeId, id));
-  if (used && used.n > 0) {
-    throw conflict(`${used.n} tag${used.n === 1 ? "" : "s"} on the drawings use ${current.mark}. Retype or delete them first.`);
-  }
-  const rows = await db
-    .delete(openingTypes)
-    .where(and(scoped(s, id), eq(openingTypes.version, version)))
-    .returning({ id: openingTypes.id })
-    .catch((error) => {
-      // A tag placed between the count above and this delete: the foreign key refuses, and so do we.
-      throw isForeignKeyViolation(error) ? conflict(`Tags on the drawings use ${current.mark}. Retype or delete them first.`) : error;
-    });
-  if (rows.length === 0) throw stale(await getOpeningType(s, id).catch(() => null));
+  const [used] = await db.select({ n: sql<number>`count(*)::int` }).from(tags).where(and(eq(tags.orgId, s.orgId), eq(tags.openingTypeId, id)));
+  const impact = { tags: used?.n ?? 0, openings: (await getCounts(s)).job[id] ?? 0 };
+  const n = impact.tags;
+  requireConfirmed(current.mark, impact, confirmedTags, `${n} tag${n === 1 ? "" : "s"} on the drawings use ${current.mark} (${impact.openings} opening${impact.openings === 1 ? "" : "s"} counted in the job); deleting ${current.mark} removes them too.`);
+  await db.transaction(async (tx) => {
+    const removed = await tx.delete(tags).where(and(eq(tags.orgId, s.orgId), eq(tags.projectId, s.projectId), eq(tags.openingTypeId, id))).returning({ id: tags.id });
+    // A tag placed or removed since the count: the person agreed to a different number, so undo.
+    if (removed.length !== n) throw conflict(`Tags of ${current.mark} changed while you confirmed. Check the count and confirm again.`);
+    const rows = await tx
+      .delete(openingTypes)
+      .where(and(scoped(s, id), eq(openingTypes.version, version)))
+      .returning({ id: openingTypes.id })
+      .catch((error) => {
+        throw isForeignKeyViolation(error) ? conflict(`Tags on the drawings use ${current.mark}. Check the count and confirm again.`) : error;
+      });
+    if (rows.length === 0) throw stale(await getOpeningType(s, id).catch(() => null));
+  });
 }

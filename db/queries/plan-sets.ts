@@ -5,7 +5,8 @@ import { notFound } from "@/lib/errors";
 import type { PlanSetView } from "@/lib/plans/api-types";
 import { getCounts } from "./counts";
 import { assertProject, type ProjectScope } from "./project-scope";
-import { requireConfirmed, sheetsImpact } from "./removal-impact";
+import { sheetsImpact } from "@/lib/plans/removal-impact";
+import { requireConfirmed } from "./removal-impact";
 
 const fields = {
   id: planSets.id,

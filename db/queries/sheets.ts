@@ -7,7 +7,8 @@ import type { SheetView } from "@/lib/plans/api-types";
 import type { SheetUpdateInput } from "@/lib/validators/plans";
 import { getCounts } from "./counts";
 import { assertProject, type ProjectScope } from "./project-scope";
-import { requireConfirmed, sheetsImpact } from "./removal-impact";
+import { sheetsImpact } from "@/lib/plans/removal-impact";
+import { requireConfirmed } from "./removal-impact";
 
 const tagCount = sql<number>`(select count(*)::int from ${tags} where ${tags.sheetId} = ${sheets.id})`;
 

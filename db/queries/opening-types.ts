@@ -8,6 +8,7 @@ import type { OpeningTypeView } from "@/lib/plans/api-types";
 import type { OpeningTypeCreateInput, OpeningTypeUpdateInput } from "@/lib/validators/plans";
 import { trimSpecSchema, wallSetback, type TrimSpec, type WallBuildUp } from "@/takeoff";
 import { getCounts } from "./counts";
+import { checkOpening } from "@/lib/takeoffs/opening-check";
 import { assertProject, type ProjectScope } from "./project-scope";
 import { requireConfirmed } from "./removal-impact";
 
@@ -50,6 +51,12 @@ function resolveSetback(setback: number | undefined, wall: WallBuildUp | null | 
   }
 }
 
+/** The sizes and spec together must make a window that can be cut, or the first takeoff would fail on it. */
+function assertCuttable(opening: { width: number; height: number; setback: number }, trimSpec: TrimSpec) {
+  const checked = checkOpening(opening, trimSpec);
+  if ("problem" in checked) throw invalid({ [checked.problem.field]: checked.problem.message }, checked.problem.message);
+}
+
 async function organisationTrimDefaults(orgId: string): Promise<TrimSpec> {
   const [org] = await db.select({ d: organisations.trimDefaults }).from(organisations).where(eq(organisations.id, orgId));
   return org?.d ?? FALLBACK_TRIM_SPEC;
@@ -69,6 +76,8 @@ export async function getOpeningType(s: ProjectScope, id: string): Promise<Openi
 export async function createOpeningType(s: ProjectScope, input: OpeningTypeCreateInput): Promise<OpeningTypeView> {
   await assertProject(s);
   const trimSpec = checkedSpec(await organisationTrimDefaults(s.orgId), input.trimSpec);
+  const setback = resolveSetback(input.setback, input.wallBuildUp);
+  assertCuttable({ width: input.width, height: input.height, setback }, trimSpec);
   try {
     const [row] = await db
       .insert(openingTypes)
@@ -77,7 +86,7 @@ export async function createOpeningType(s: ProjectScope, input: OpeningTypeCreat
         mark: input.mark,
         width: input.width,
         height: input.height,
-        setback: resolveSetback(input.setback, input.wallBuildUp),
+        setback,
         wallBuildUp: input.wallBuildUp ?? null,
         trimSpec,
         notes: input.notes ?? null,
@@ -102,6 +111,7 @@ export async function updateOpeningType(s: ProjectScope, id: string, input: Open
     trimSpec: trimSpec ? checkedSpec(current.trimSpec, trimSpec) : current.trimSpec,
   };
   if (setback !== undefined && wallBuildUp === undefined) set.wallBuildUp = null;
+  assertCuttable({ width: set.width ?? current.width, height: set.height ?? current.height, setback: set.setback }, set.trimSpec);
   try {
     const rows = await db
       .update(openingTypes)

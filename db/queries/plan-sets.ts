@@ -13,6 +13,7 @@ const fields = {
   name: planSets.name,
   sizeBytes: planSets.sizeBytes,
   pageCount: planSets.pageCount,
+  contentHash: planSets.contentHash,
   createdAt: planSets.createdAt,
 } as const;
 
@@ -44,14 +45,14 @@ export interface InspectedPage {
 /** The plan set and one sheet per page, in one transaction: a failure leaves neither. */
 export async function createPlanSet(
   s: ProjectScope & { userId: string },
-  file: { name: string; key: string; size: number },
+  file: { name: string; key: string; size: number; contentHash?: string },
   pages: InspectedPage[],
 ) {
   return db.transaction(async (tx) => {
     await assertProject(s, tx);
     const [set] = await tx
       .insert(planSets)
-      .values({ orgId: s.orgId, projectId: s.projectId, name: file.name, fileKey: file.key, sizeBytes: file.size, pageCount: pages.length, uploadedBy: s.userId })
+      .values({ orgId: s.orgId, projectId: s.projectId, name: file.name, fileKey: file.key, contentHash: file.contentHash ?? null, sizeBytes: file.size, pageCount: pages.length, uploadedBy: s.userId })
       .returning({ id: planSets.id });
     await tx.insert(sheets).values(
       pages.map((p) => ({

@@ -16,6 +16,8 @@ export interface PlanSetView {
   name: string;
   sizeBytes: number;
   pageCount: number;
+  /** SHA-256 of the file's bytes (hex), or null for sets uploaded before it was kept. */
+  contentHash: string | null;
   createdAt: string;
 }
 

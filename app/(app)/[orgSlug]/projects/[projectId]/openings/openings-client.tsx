@@ -13,14 +13,21 @@ import { WindowListTable } from "@/components/plans/window-list/window-list-tabl
 export function OpeningsView({ orgSlug, projectId, canWrite }: { orgSlug: string; projectId: string; canWrite: boolean }) {
   const { types, counts, controls, added } = useWindowList(orgSlug, projectId, canWrite);
   const job = counts.data?.counts.job;
+  const sheetCounts = counts.data?.counts.sheets;
   // Any edit of the list bumps a version: the gap check is re-read for it.
   const typesVersion = (types.data?.openingTypes ?? []).map((t) => `${t.id}:${t.version}`).join();
   const priceGaps = usePriceGaps(orgSlug, projectId, typesVersion);
   const gapList = priceGaps.gaps.data?.gaps;
   // Stable rows: TanStack Table recomputes its models whenever the array changes.
   const rows = useMemo<WindowListRow[]>(
-    () => (types.data?.openingTypes ?? []).map((t) => ({ ...t, count: job?.[t.id] ?? 0, gaps: gapList?.filter((g) => g.openingTypeId === t.id) })),
-    [types.data, job, gapList],
+    () =>
+      (types.data?.openingTypes ?? []).map((t) => ({
+        ...t,
+        count: job?.[t.id] ?? 0,
+        tags: (sheetCounts ?? []).reduce((n, s) => n + (s.byType[t.id] ?? 0), 0),
+        gaps: gapList?.filter((g) => g.openingTypeId === t.id),
+      })),
+    [types.data, job, sheetCounts, gapList],
   );
   const total = counts.data?.counts.jobTotal;
 

@@ -24,7 +24,7 @@ const password = "return-miter-6666";
 
 /**
  * A company with an estimator; a project whose plan set has A-201 (Type A, 6 units) and A-401, a
- * repeat of the same unit plan that was also counted; W1 ×2 and W2 ×1 tagged on each; and an "M"
+ * repeat of the same unit plan that was also counted; W1 ×2, W2 ×1 and M ×1 tagged on each, M being a
  * window with a 9" setback the demo price book has no stool or extension stock for.
  */
 async function seed() {
@@ -45,10 +45,8 @@ async function seed() {
   const m = await createOpeningType(scope, { mark: "M", width: 40, height: 60, setback: 9 });
   for (const sheet of await listSheets(scope)) {
     await updateSheet(scope, sheet.id, { version: sheet.version, unitTypeId: typeA.id, countRole: "counted" });
-    for (const [ot, x, y] of [[w1.id, 400, 300], [w1.id, 520, 300], [w2.id, 900, 700]] as const) await createTag(scope, { sheetId: sheet.id, openingTypeId: ot, x, y });
+    for (const [ot, x, y] of [[w1.id, 400, 300], [w1.id, 520, 300], [w2.id, 900, 700], [m.id, 1200, 300]] as const) await createTag(scope, { sheetId: sheet.id, openingTypeId: ot, x, y });
   }
-  const [first] = await listSheets(scope);
-  await createTag(scope, { sheetId: first!.id, openingTypeId: m.id, x: 1200, y: 300 });
   await seedDemoPriceBook(organisation.id, admin.id);
   await pool.end();
   return { email: estimator!.email, projectName };
@@ -71,7 +69,7 @@ test("repeated layouts, delete questions, price-book gaps and a second upload of
     await expect(warnings).toContainText("A-201 and A-401 carry the same tags for Type A, and each counts × 6");
     await page.getByLabel("Counting of A-401").selectOption("reference");
     await expect(warnings).toHaveCount(0);
-    // The job now counts one unit plan × 6 units: M 6, W1 12, W2 6, all 24 (it was 6, 24, 12 and 42).
+    // The job now counts one unit plan × 6 units: M 6, W1 12, W2 6, all 24 (it was 12, 24, 12 and 48).
     await expect(page.getByRole("row", { name: /^Job/ })).toHaveText(/^Job\s*6\s*12\s*6\s*24$/);
   });
 
@@ -85,7 +83,7 @@ test("repeated layouts, delete questions, price-book gaps and a second upload of
 
     await page.getByRole("button", { name: "Delete sheet A-401" }).click();
     const reference = page.getByRole("dialog", { name: "Delete sheet A-401?" });
-    await expect(reference).toContainText("This also deletes 3 tags placed on the drawings (on reference views: they count no openings).");
+    await expect(reference).toContainText("This also deletes 4 tags placed on the drawings (on reference views: they count no openings).");
     await reference.getByRole("button", { name: "Delete sheet" }).click();
     await expect(reference).toBeHidden();
     await expect(page.getByRole("link", { name: "A-401", exact: true })).toHaveCount(0);

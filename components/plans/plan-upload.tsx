@@ -3,7 +3,8 @@
 import { generateReactHelpers } from "@uploadthing/react";
 import { useRef, useState, type DragEvent } from "react";
 import type { PlanRouter } from "@/app/api/uploadthing/core";
-import type { PlanUploadResult } from "@/lib/plans/api-types";
+import type { PlanSetView, PlanUploadResult } from "@/lib/plans/api-types";
+import { fileDigest } from "@/lib/plans/upload-progress";
 import { UploadRow, type UploadItem } from "./upload-row";
 
 const { uploadFiles } = generateReactHelpers<PlanRouter>();
@@ -18,20 +19,56 @@ export function PlanUpload({ orgSlug, projectId, onUploaded }: { orgSlug: string
   const inputRef = useRef<HTMLInputElement>(null);
   const patch = (id: string, change: Partial<UploadItem>) => setItems((all) => all.map((i) => (i.id === id ? { ...i, ...change } : i)));
 
+  /** The project's plan sets with the same bytes, or none (also when the browser cannot hash or the list cannot be read). */
+  async function sameFile(file: File): Promise<PlanSetView | undefined> {
+    try {
+      const digest = await fileDigest(file);
+      if (!digest) return undefined;
+      const res = await fetch(`/api/orgs/${orgSlug}/projects/${projectId}/plan-sets`);
+      if (!res.ok) return undefined;
+      const { planSets } = (await res.json()) as { planSets: PlanSetView[] };
+      return planSets.find((p) => p.contentHash === digest);
+    } catch {
+      return undefined;
+    }
+  }
+
   async function upload(file: File) {
     const id = `${file.name}-${file.size}-${Date.now()}-${Math.random()}`;
     const controller = new AbortController();
-    setItems((all) => [...all, { id, name: file.name, size: file.size, progress: 0, status: "uploading", abort: () => controller.abort() }]);
+    const base = { id, name: file.name, size: file.size, loaded: 0, abort: () => controller.abort() };
+    if (file.size === 0) {
+      setItems((all) => [...all, { ...base, status: "refused", message: `${file.name} is empty (0 bytes): there is nothing to upload.` }]);
+      return;
+    }
+    setItems((all) => [...all, { ...base, status: "comparing" }]);
+    const twin = await sameFile(file);
+    if (twin) {
+      // Ask before sending: a second copy of a set doubles its sheets, and whoever tags them doubles the count.
+      patch(id, {
+        status: "duplicate",
+        duplicateOf: { name: twin.name, uploadedAt: twin.createdAt, pageCount: twin.pageCount },
+        skip: () => patch(id, { status: "skipped", message: `Skipped: ${twin.name} already holds this file. Nothing was added.` }),
+        keepBoth: () => void send(file, id, controller),
+      });
+      return;
+    }
+    await send(file, id, controller);
+  }
+
+  async function send(file: File, id: string, controller: AbortController) {
+    patch(id, { status: "starting", loaded: 0 });
     try {
       const [done] = await uploadFiles("planSet", {
         files: [file],
         input: { orgSlug, projectId },
         signal: controller.signal,
-        onUploadProgress: ({ progress }) => patch(id, { progress, status: progress >= 100 ? "checking" : "uploading" }),
+        onUploadBegin: () => patch(id, { status: "uploading" }),
+        onUploadProgress: ({ loaded }) => patch(id, { loaded, status: loaded >= file.size ? "checking" : "uploading" }),
       });
       const result = done?.serverData as PlanUploadResult | null | undefined;
       if (result?.ok) {
-        patch(id, { status: "done", progress: 100, message: `${result.pageCount} sheet${result.pageCount === 1 ? "" : "s"} added.` });
+        patch(id, { status: "done", loaded: file.size, message: `${result.pageCount} sheet${result.pageCount === 1 ? "" : "s"} added.` });
         onUploaded();
       } else {
         patch(id, { status: "refused", message: result?.error ?? "The server did not confirm this upload. Reload to see whether it arrived." });

@@ -46,7 +46,7 @@ export function RunTakeoffForm({
   const bookCasings = casings.filter((c) => c.priceBookId === bookId);
 
   const run = useMutation({
-    mutationFn: (body: { name: string; note: string; priceBookId: string; casingItemId: string | null }) =>
+    mutationFn: (body: { name: string; note: string; priceBookId: string; casingItemId: string | null; allowPlaceholders: boolean }) =>
       api<{ takeoff: { id: string } }>(takeoffsApi(orgSlug, projectId), { method: "POST", body }),
     onSuccess: ({ takeoff }) => {
       void queryClient.invalidateQueries({ queryKey: ["takeoffs", orgSlug, projectId] });
@@ -65,6 +65,7 @@ export function RunTakeoffForm({
       note: String(form.get("note") ?? ""),
       priceBookId: bookId,
       casingItemId: casingId || null,
+      allowPlaceholders: form.get("allowPlaceholders") === "on",
     });
   }
 
@@ -120,6 +121,15 @@ export function RunTakeoffForm({
             </Select>
           </Field>
         </div>
+        <label className="flex items-start gap-2 text-sm text-graphite-900">
+          <input type="checkbox" name="allowPlaceholders" className="mt-1" />
+          <span>
+            Price sizes the book lacks with placeholder prices
+            <span className="block text-xs text-graphite-700">
+              Marked as placeholders on the takeoff and its documents; the takeoff cannot be submitted as the bid until the price book has them.
+            </span>
+          </span>
+        </label>
         <Button type="submit" disabled={busy || !bookId}>
           {busy ? "Running the takeoff…" : "Run takeoff"}
         </Button>

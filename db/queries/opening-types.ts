@@ -7,7 +7,10 @@ import { FALLBACK_TRIM_SPEC } from "@/lib/plans/default-trim";
 import type { OpeningTypeView } from "@/lib/plans/api-types";
 import type { OpeningTypeCreateInput, OpeningTypeUpdateInput } from "@/lib/validators/plans";
 import { trimSpecSchema, wallSetback, type TrimSpec, type WallBuildUp } from "@/takeoff";
+import { getCounts } from "./counts";
+import { checkOpening } from "@/lib/takeoffs/opening-check";
 import { assertProject, type ProjectScope } from "./project-scope";
+import { requireConfirmed } from "./removal-impact";
 
 const fields = {
   id: openingTypes.id,
@@ -48,6 +51,12 @@ function resolveSetback(setback: number | undefined, wall: WallBuildUp | null | 
   }
 }
 
+/** The sizes and spec together must make a window that can be cut, or the first takeoff would fail on it. */
+function assertCuttable(opening: { width: number; height: number; setback: number }, trimSpec: TrimSpec) {
+  const checked = checkOpening(opening, trimSpec);
+  if ("problem" in checked) throw invalid({ [checked.problem.field]: checked.problem.message }, checked.problem.message);
+}
+
 async function organisationTrimDefaults(orgId: string): Promise<TrimSpec> {
   const [org] = await db.select({ d: organisations.trimDefaults }).from(organisations).where(eq(organisations.id, orgId));
   return org?.d ?? FALLBACK_TRIM_SPEC;
@@ -67,6 +76,8 @@ export async function getOpeningType(s: ProjectScope, id: string): Promise<Openi
 export async function createOpeningType(s: ProjectScope, input: OpeningTypeCreateInput): Promise<OpeningTypeView> {
   await assertProject(s);
   const trimSpec = checkedSpec(await organisationTrimDefaults(s.orgId), input.trimSpec);
+  const setback = resolveSetback(input.setback, input.wallBuildUp);
+  assertCuttable({ width: input.width, height: input.height, setback }, trimSpec);
   try {
     const [row] = await db
       .insert(openingTypes)
@@ -75,7 +86,7 @@ export async function createOpeningType(s: ProjectScope, input: OpeningTypeCreat
         mark: input.mark,
         width: input.width,
         height: input.height,
-        setback: resolveSetback(input.setback, input.wallBuildUp),
+        setback,
         wallBuildUp: input.wallBuildUp ?? null,
         trimSpec,
         notes: input.notes ?? null,
@@ -100,6 +111,7 @@ export async function updateOpeningType(s: ProjectScope, id: string, input: Open
     trimSpec: trimSpec ? checkedSpec(current.trimSpec, trimSpec) : current.trimSpec,
   };
   if (setback !== undefined && wallBuildUp === undefined) set.wallBuildUp = null;
+  assertCuttable({ width: set.width ?? current.width, height: set.height ?? current.height, setback: set.setback }, set.trimSpec);
   try {
     const rows = await db
       .update(openingTypes)
@@ -113,20 +125,28 @@ export async function updateOpeningType(s: ProjectScope, id: string, input: Open
   }
 }
 
-export async function deleteOpeningType(s: ProjectScope, id: string, version: number) {
+/**
+ * Deletes an opening type and, once the person confirmed how many, the tags of that type with it (one
+ * transaction). Without that confirmation a type in use is refused with what it would take.
+ */
+export async function deleteOpeningType(s: ProjectScope, id: string, version: number, confirmedTags?: number) {
   const current = await getOpeningType(s, id);
   if (current.version !== version) throw stale(current);
-  const [used] = await db.select({ n: sql<number>`count(*)::int` }).from(tags).where(eq(tags.openingTypeId, id));
-  if (used && used.n > 0) {
-    throw conflict(`${used.n} tag${used.n === 1 ? "" : "s"} on the drawings use ${current.mark}. Retype or delete them first.`);
-  }
-  const rows = await db
-    .delete(openingTypes)
-    .where(and(scoped(s, id), eq(openingTypes.version, version)))
-    .returning({ id: openingTypes.id })
-    .catch((error) => {
-      // A tag placed between the count above and this delete: the foreign key refuses, and so do we.
-      throw isForeignKeyViolation(error) ? conflict(`Tags on the drawings use ${current.mark}. Retype or delete them first.`) : error;
-    });
-  if (rows.length === 0) throw stale(await getOpeningType(s, id).catch(() => null));
+  const [used] = await db.select({ n: sql<number>`count(*)::int` }).from(tags).where(and(eq(tags.orgId, s.orgId), eq(tags.openingTypeId, id)));
+  const impact = { tags: used?.n ?? 0, openings: (await getCounts(s)).job[id] ?? 0 };
+  const n = impact.tags;
+  requireConfirmed(current.mark, impact, confirmedTags, `${n} tag${n === 1 ? "" : "s"} on the drawings use ${current.mark} (${impact.openings} opening${impact.openings === 1 ? "" : "s"} counted in the job); deleting ${current.mark} removes them too.`);
+  await db.transaction(async (tx) => {
+    const removed = await tx.delete(tags).where(and(eq(tags.orgId, s.orgId), eq(tags.projectId, s.projectId), eq(tags.openingTypeId, id))).returning({ id: tags.id });
+    // A tag placed or removed since the count: the person agreed to a different number, so undo.
+    if (removed.length !== n) throw conflict(`Tags of ${current.mark} changed while you confirmed. Check the count and confirm again.`);
+    const rows = await tx
+      .delete(openingTypes)
+      .where(and(scoped(s, id), eq(openingTypes.version, version)))
+      .returning({ id: openingTypes.id })
+      .catch((error) => {
+        throw isForeignKeyViolation(error) ? conflict(`Tags on the drawings use ${current.mark}. Check the count and confirm again.`) : error;
+      });
+    if (rows.length === 0) throw stale(await getOpeningType(s, id).catch(() => null));
+  });
 }

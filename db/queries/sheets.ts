@@ -5,7 +5,10 @@ import { invalid, notFound, stale } from "@/lib/errors";
 import { inchesPerUnitFromPoints, inchesPerUnitFromScale, scaleMismatchPercent } from "@/lib/plans/calibration";
 import type { SheetView } from "@/lib/plans/api-types";
 import type { SheetUpdateInput } from "@/lib/validators/plans";
+import { getCounts } from "./counts";
 import { assertProject, type ProjectScope } from "./project-scope";
+import { sheetsImpact } from "@/lib/plans/removal-impact";
+import { requireConfirmed } from "./removal-impact";
 
 const tagCount = sql<number>`(select count(*)::int from ${tags} where ${tags.sheetId} = ${sheets.id})`;
 
@@ -16,6 +19,7 @@ const fields = {
   pageNumber: sheets.pageNumber,
   label: sheets.label,
   unitTypeId: sheets.unitTypeId,
+  countRole: sheets.countRole,
   width: sheets.width,
   height: sheets.height,
   rotation: sheets.rotation,
@@ -58,7 +62,23 @@ export async function getSheet(s: ProjectScope, id: string): Promise<SheetView> 
   return toView(row);
 }
 
-/** Label, unit type and calibration, with a version check so two estimators never overwrite each other. */
+/**
+ * The role a sheet takes when it joins a unit type and nobody said which: it counts unless another
+ * sheet already counts for that unit type, because a second sheet of one unit type is most often an
+ * enlarged plan or a repeat, and counting it twice doubles every window of the type. Common-area
+ * sheets count (each floor's corridor is its own openings).
+ */
+async function defaultRole(s: ProjectScope, id: string, unitTypeId: string | null): Promise<"counted" | "reference"> {
+  if (!unitTypeId) return "counted";
+  const [other] = await db
+    .select({ id: sheets.id })
+    .from(sheets)
+    .where(and(scoped(s), eq(sheets.unitTypeId, unitTypeId), eq(sheets.countRole, "counted"), sql`${sheets.id} <> ${id}`))
+    .limit(1);
+  return other ? "reference" : "counted";
+}
+
+/** Label, unit type, count role and calibration, with a version check so two estimators never overwrite each other. */
 export async function updateSheet(s: ProjectScope, id: string, input: SheetUpdateInput): Promise<SheetView> {
   const current = await getSheet(s, id);
   if (current.version !== input.version) throw stale(current);
@@ -74,7 +94,9 @@ export async function updateSheet(s: ProjectScope, id: string, input: SheetUpdat
       if (!ut) throw invalid({ unitTypeId: "No such unit type in this project." });
     }
     set.unitTypeId = input.unitTypeId;
+    if (input.countRole === undefined && input.unitTypeId !== current.unitTypeId) set.countRole = await defaultRole(s, id, input.unitTypeId);
   }
+  if (input.countRole !== undefined) set.countRole = input.countRole;
   if (input.scale !== undefined) {
     set.scaleRatio = input.scale?.ratio ?? null;
     set.scaleLabel = input.scale?.label ?? null;
@@ -99,4 +121,23 @@ export async function updateSheet(s: ProjectScope, id: string, input: SheetUpdat
     .returning({ id: sheets.id });
   if (updated.length === 0) throw stale(await getSheet(s, id));
   return getSheet(s, id);
+}
+
+/**
+ * Removes one sheet and its tags (the foreign key cascades). Version-checked like an edit, so a sheet
+ * someone just tagged is not deleted on the strength of an older count.
+ */
+export async function deleteSheet(s: ProjectScope, id: string, version: number, confirmedTags?: number): Promise<void> {
+  const current = await getSheet(s, id);
+  if (current.version !== version) throw stale(current);
+  const impact = sheetsImpact(await getCounts(s), new Set([id]));
+  requireConfirmed(current.label, impact, confirmedTags);
+  await db.transaction(async (tx) => {
+    // The sheet row locked first, so a tag placed after the count above is seen here, not lost unseen.
+    const locked = await tx.select({ id: sheets.id }).from(sheets).where(and(scoped(s, id), eq(sheets.version, version))).for("update");
+    if (locked.length === 0) throw stale(await getSheet(s, id).catch(() => null));
+    const [now] = await tx.select({ n: sql<number>`count(*)::int` }).from(tags).where(eq(tags.sheetId, id));
+    if ((now?.n ?? 0) !== impact.tags) requireConfirmed(current.label, { ...impact, tags: now?.n ?? 0 }, confirmedTags);
+    await tx.delete(sheets).where(and(scoped(s, id), eq(sheets.version, version)));
+  });
 }

@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "../client";
 import { projects, takeoffs } from "../schema";
-import { conflict, notFound } from "@/lib/errors";
+import { AppError, conflict, notFound } from "@/lib/errors";
 import { getTakeoff } from "./takeoffs";
 import type { ProjectScope } from "./project-scope";
 
@@ -35,6 +35,17 @@ export async function deleteTakeoff(s: ProjectScope, id: string) {
  * "submitted" (a project that was already won or lost keeps that status).
  */
 export async function submitTakeoff(s: ProjectScope & { userId: string }, id: string) {
+  const current = await getTakeoff(s, id);
+  const placeholders = current.result.placeholders ?? [];
+  if (current.status === "draft" && placeholders.length > 0) {
+    // A placeholder price is a guess the price book never confirmed: it may not go out as the bid.
+    throw new AppError(
+      409,
+      `This takeoff prices ${placeholders.length} item${placeholders.length === 1 ? "" : "s"} with a placeholder (${placeholders.map((p) => `${p.itemName.replace(/^PLACEHOLDER /, "")} for ${p.marks.join(", ")}`).join("; ")}). Add ${placeholders.length === 1 ? "it" : "them"} to the price book and run the takeoff again before submitting it.`,
+      undefined,
+      { code: "placeholder_prices" },
+    );
+  }
   await db.transaction(async (tx) => {
     const rows = await tx
       .update(takeoffs)

@@ -1,8 +1,8 @@
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "../client";
 import { organisations, priceBookItems, priceBooks, takeoffs, users } from "../schema";
-import { invalid, notFound } from "@/lib/errors";
-import { computeTakeoff, MissingItem } from "@/lib/takeoffs/compute";
+import { AppError, invalid, notFound } from "@/lib/errors";
+import { computeTakeoff, MissingItem, OpeningTypeProblem, PriceGaps } from "@/lib/takeoffs/compute";
 import { DEFAULT_TAKEOFF_SETTINGS } from "@/lib/takeoffs/settings";
 import type { TakeoffInputs, TakeoffPrices } from "@/lib/takeoffs/types";
 import type { RunTakeoffInput } from "@/lib/validators/takeoff";
@@ -12,7 +12,7 @@ import { assertProject, type ProjectScope } from "./project-scope";
 import { listUnitTypes } from "./unit-types";
 
 /** The window list, unit types and counts as they are now, with the company's kerf and waste. */
-async function snapshotInputs(s: ProjectScope, casingItemId: string | null): Promise<TakeoffInputs> {
+async function snapshotInputs(s: ProjectScope, casingItemId: string | null, allowPlaceholders: boolean): Promise<TakeoffInputs> {
   const [[org], openingTypes, unitTypes, counts] = await Promise.all([
     db.select({ settings: organisations.takeoffSettings }).from(organisations).where(eq(organisations.id, s.orgId)),
     listOpeningTypes(s),
@@ -22,6 +22,7 @@ async function snapshotInputs(s: ProjectScope, casingItemId: string | null): Pro
   return {
     settings: org?.settings ?? DEFAULT_TAKEOFF_SETTINGS,
     casingItemId,
+    ...(allowPlaceholders ? { allowPlaceholders: true } : {}),
     unitTypes: unitTypes.map((u) => ({ id: u.id, name: u.name, count: u.count })),
     openingTypes: openingTypes.map((o) => ({ id: o.id, mark: o.mark, width: o.width, height: o.height, setback: o.setback, trimSpec: o.trimSpec })),
     counts: {
@@ -33,7 +34,7 @@ async function snapshotInputs(s: ProjectScope, casingItemId: string | null): Pro
 }
 
 /** The price book's prices now: saved with the takeoff so a later price change never rewrites it. */
-async function snapshotPrices(orgId: string, priceBookId: string): Promise<TakeoffPrices> {
+export async function snapshotPrices(orgId: string, priceBookId: string): Promise<TakeoffPrices> {
   const [book] = await db.select().from(priceBooks).where(and(eq(priceBooks.orgId, orgId), eq(priceBooks.id, priceBookId)));
   if (!book) throw invalid({ priceBookId: "No such price book." });
   const items = await db.select().from(priceBookItems).where(and(eq(priceBookItems.orgId, orgId), eq(priceBookItems.priceBookId, priceBookId)));
@@ -59,13 +60,17 @@ async function snapshotPrices(orgId: string, priceBookId: string): Promise<Takeo
 export async function runTakeoff(s: ProjectScope & { userId: string }, input: RunTakeoffInput) {
   await assertProject(s);
   const prices = await snapshotPrices(s.orgId, input.priceBookId);
-  const inputs = await snapshotInputs(s, input.casingItemId ?? null);
+  const inputs = await snapshotInputs(s, input.casingItemId ?? null, input.allowPlaceholders ?? false);
   if (inputs.openingTypes.length === 0) throw invalid({ _: "The window list is empty: add opening types and tag them first." });
   let result;
   try {
     result = await computeTakeoff(inputs, prices);
   } catch (error) {
-    // A size the price book does not carry is the estimator's to fix, not a server fault.
+    // A window that cannot be cut, or a size the price book does not carry, is the estimator's to fix, not a server fault.
+    if (error instanceof OpeningTypeProblem) throw invalid({ [`openingTypes.${error.mark}.${error.field}`]: error.message }, error.message);
+    if (error instanceof PriceGaps) {
+      throw new AppError(422, error.message, { priceBookId: error.message }, { code: "price_gaps", gaps: error.gaps.map(({ mark, material, kind, message, fix }) => ({ mark, material, kind, message, fix })) });
+    }
     if (error instanceof MissingItem) throw invalid({ priceBookId: error.message }, error.message);
     throw error;
   }

@@ -52,13 +52,22 @@ export const planSets = pgTable(
     projectId: projectId(),
     name: text("name").notNull(),
     fileKey: text("file_key").notNull(),
+    // SHA-256 of the bytes as the server read them back; null for sets uploaded before it was kept.
+    contentHash: text("content_hash"),
     sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
     pageCount: integer("page_count").notNull(),
     uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex("plan_sets_file_key_key").on(t.fileKey), index("plan_sets_project_idx").on(t.projectId)],
+  (t) => [
+    uniqueIndex("plan_sets_file_key_key").on(t.fileKey),
+    index("plan_sets_project_idx").on(t.projectId),
+    index("plan_sets_project_hash_idx").on(t.projectId, t.contentHash),
+  ],
 );
+
+export const SHEET_COUNT_ROLES = ["counted", "reference"] as const;
+export type SheetCountRole = (typeof SHEET_COUNT_ROLES)[number];
 
 /** Two picked points on a known dimension, in PDF user space, and the length typed for it (inches). */
 export interface CalibrationPoints {
@@ -82,6 +91,9 @@ export const sheets = pgTable(
     pageNumber: integer("page_number").notNull(),
     label: text("label").notNull(),
     unitTypeId: uuid("unit_type_id").references(() => unitTypes.id, { onDelete: "set null" }),
+    // Whether this sheet's tags count toward its unit type (or the common areas), or it is a reference
+    // view (an enlarged plan, a repeat of a unit plan already counted) whose tags count for nothing.
+    countRole: text("count_role", { enum: SHEET_COUNT_ROLES }).notNull().default("counted"),
     // The page box (unrotated) and how the page is turned for display.
     width: doublePrecision("width").notNull(),
     height: doublePrecision("height").notNull(),
@@ -101,6 +113,7 @@ export const sheets = pgTable(
     uniqueIndex("sheets_plan_set_page_key").on(t.planSetId, t.pageNumber),
     index("sheets_project_idx").on(t.projectId),
     check("sheets_rotation", sql`${t.rotation} in (0, 90, 180, 270)`),
+    check("sheets_count_role", sql`${t.countRole} in ('counted', 'reference')`),
   ],
 );
 

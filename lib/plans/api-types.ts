@@ -16,6 +16,8 @@ export interface PlanSetView {
   name: string;
   sizeBytes: number;
   pageCount: number;
+  /** SHA-256 of the file's bytes (hex), or null for sets uploaded before it was kept. */
+  contentHash: string | null;
   createdAt: string;
 }
 
@@ -28,6 +30,9 @@ export interface CalibrationPointsView {
   inches: number;
 }
 
+/** Counted: the sheet's tags count toward its unit type (or the common areas). Reference: an enlarged plan or a repeat, not counted. */
+export type SheetCountRole = "counted" | "reference";
+
 export interface SheetView {
   id: string;
   planSetId: string;
@@ -35,6 +40,7 @@ export interface SheetView {
   pageNumber: number;
   label: string;
   unitTypeId: string | null;
+  countRole: SheetCountRole;
   /** Unrotated page box size, PDF units. */
   width: number;
   height: number;
@@ -79,14 +85,25 @@ export interface TagView {
 /** Opening counts keyed by opening type id. */
 export type CountByType = Record<string, number>;
 
+/**
+ * Something in the counts an estimator should look at before a takeoff:
+ * two counted sheets of one unit type carrying the same tag layout (likely the same plan counted twice),
+ * or a unit type whose sheets are all reference views (so it counts nothing).
+ */
+export type CountWarning =
+  | { kind: "same-layout"; unitTypeId: string | null; sheetIds: string[]; message: string }
+  | { kind: "no-counted-sheet"; unitTypeId: string; sheetIds: string[]; message: string };
+
 export interface CountsView {
-  sheets: { sheetId: string; label: string; unitTypeId: string | null; byType: CountByType; total: number }[];
+  /** Every sheet with its own tags; only `counted` ones feed the unit types, the common areas and the job. */
+  sheets: { sheetId: string; label: string; unitTypeId: string | null; countRole: SheetCountRole; byType: CountByType; total: number }[];
   unitTypes: { unitTypeId: string; name: string; unitCount: number; perUnit: CountByType; allUnits: CountByType }[];
   /** Tags on sheets without a unit type: common areas, counted once. */
   commonAreas: CountByType;
   /** Per unit type (tags × unit count) plus common areas. */
   job: CountByType;
   jobTotal: number;
+  warnings: CountWarning[];
 }
 
 /** A refused stale edit: 409 with the row as it is now, so the client can show the latest state. */

@@ -1,3 +1,4 @@
+import { createHash } from "node:crypto";
 import { createPlanSet } from "@/db/queries/plan-sets";
 import type { ProjectScope } from "@/db/queries/project-scope";
 import { inspectPdf, isPdfRejected } from "@/lib/pdf/inspect";
@@ -18,7 +19,9 @@ export async function ingestPlanUpload(
     if (!res.ok) throw new Error(`upload service answered ${res.status} for ${file.key}`);
     const bytes = new Uint8Array(await res.arrayBuffer());
     const inspection = await inspectPdf(bytes);
-    const planSetId = await createPlanSet(scope, { key: file.key, name: file.name, size: bytes.byteLength }, inspection.pages);
+    // The digest of the bytes as read back (not as the browser claimed), so a second upload of one file can be recognised.
+    const contentHash = createHash("sha256").update(bytes).digest("hex");
+    const planSetId = await createPlanSet(scope, { key: file.key, name: file.name, size: bytes.byteLength, contentHash }, inspection.pages);
     return { ok: true, planSetId, pageCount: inspection.pageCount };
   } catch (error) {
     await deleteStoredFiles([file.key]).catch((e) => console.error("could not delete refused upload", file.key, e));

@@ -55,3 +55,20 @@ it("prints characters outside the standard fonts as ? instead of failing", async
   });
   expect(await pdfText(bytes)).toContain("?ód? Trim ??");
 });
+
+it("a takeoff priced with placeholders prints as a draft, naming each placeholder", async () => {
+  // A 9" setback needs a 10" stool and 9" extension stock; the test book's widest are 5 1/4 and 5 1/2.
+  const inputs = testInputs({
+    allowPlaceholders: true,
+    openingTypes: [{ id: "m", mark: "M", width: 40, height: 60, setback: 9, trimSpec: { style: "stool-and-apron", casingWidth: 2.5, casingThickness: 0.6875 } }],
+    counts: { perUnit: {}, commonAreas: { m: 2 }, job: { m: 2 } },
+  });
+  const result = await computeTakeoff(inputs, testPrices());
+  const doc = { orgName: "Birchmoor", project: { name: "Job", generalContractor: null, bidDue: null }, takeoffName: "t", priceBookName: "b", pricesAsOf: new Date(), issuedAt: new Date(), validDays: 30 };
+  const text = await pdfText(await bidSummaryPdf({ ...doc, result }));
+  expect(text).toContain("DRAFT — NOT A BID: some prices are placeholders");
+  expect(text).toContain('stool 10" wide (not in the price book) for M, priced at the rate per foot of “Stool 5 1/4 poplar”');
+  expect(text).toContain("Bid total (with placeholder prices)");
+  const clean = await pdfText(await bidSummaryPdf({ ...doc, result: await computeTakeoff(testInputs(), testPrices()) }));
+  expect(clean).not.toContain("DRAFT");
+});

@@ -20,6 +20,7 @@ const day = (d: Date) => d.toLocaleDateString("en-US", { year: "numeric", month:
 
 const SPRUCE = rgb(0.14, 0.345, 0.251);
 const GRAPHITE = rgb(0.12, 0.13, 0.145);
+const ALARM = rgb(0.706, 0.137, 0.094);
 
 class Writer {
   y = 740;
@@ -79,6 +80,13 @@ export async function bidSummaryPdf(doc: BidDocument): Promise<Uint8Array> {
   w.line(`To: ${doc.project.generalContractor ?? "General contractor"}`);
   w.line(`Issued: ${day(doc.issuedAt)}    Valid until: ${day(validUntil)}${doc.project.bidDue ? `    Bid due: ${doc.project.bidDue}` : ""}`);
   w.line(`Reference: ${doc.takeoffName}`, { gap: 22 });
+  const placeholders = result.placeholders ?? [];
+  if (placeholders.length > 0) {
+    // A placeholder is a guess the price book never confirmed: say so before any figure.
+    w.line("DRAFT — NOT A BID: some prices are placeholders", { bold: true, size: 12, color: ALARM, gap: 16 });
+    for (const p of placeholders) w.para(`• ${p.itemName.replace(/^PLACEHOLDER /, "")} for ${p.marks.join(", ")}, priced ${p.basis}.`);
+    w.para("Add these items to the price book and run the takeoff again; it cannot be submitted until then.");
+  }
 
   w.line("Scope", { bold: true, size: 11 });
   const types = result.openingTypes.filter((o) => o.quantity > 0);
@@ -94,7 +102,7 @@ export async function bidSummaryPdf(doc: BidDocument): Promise<Uint8Array> {
   w.amountRow("Markup", result.bid.markup);
   w.amountRow("Sales tax", result.bid.tax);
   w.rule();
-  w.amountRow("Bid total", result.bid.total, true);
+  w.amountRow(placeholders.length > 0 ? "Bid total (with placeholder prices)" : "Bid total", result.bid.total, true);
   w.y -= 10;
 
   w.line("Exclusions", { bold: true, size: 11 });

@@ -18,6 +18,11 @@ export interface TakeoffInputs {
   casingItemId: string | null;
   unitTypes: { id: string; name: string; count: number }[];
   openingTypes: { id: string; mark: string; width: number; height: number; setback: number; trimSpec: TrimSpec }[];
+  /**
+   * Price what the price book lacks with clearly named placeholders instead of refusing the run.
+   * Absent in takeoffs saved before placeholders existed (= false). A bid with placeholders cannot be submitted.
+   */
+  allowPlaceholders?: boolean;
   /** Tags per opening type: on each unit type's sheets (one unit), on common-area sheets, and job-wide. */
   counts: { perUnit: Record<string, Record<string, number>>; commonAreas: Record<string, number>; job: Record<string, number> };
 }
@@ -66,6 +71,21 @@ export interface BoardOrder {
   plan: StockPlan;
   /** Boards per stock length with the waste allowance added (what to buy). */
   toBuy: { stockLength: number; count: number; price: number }[];
+  /** Priced with a placeholder: the price book has no such item (see TakeoffResult.placeholders). */
+  placeholder?: true;
+}
+
+/** An item the price book lacked, priced with a stand-in so the estimator could carry on. */
+export interface PlaceholderLine {
+  itemId: string;
+  itemName: string;
+  material: Material;
+  marks: string[];
+  /** What was missing, per opening type, in words. */
+  gaps: string[];
+  /** How the stand-in price was set. */
+  basis: string;
+  pricePerFoot: number;
 }
 
 export interface MaterialSummary {
@@ -93,4 +113,6 @@ export interface TakeoffResult {
   materials: MaterialSummary[];
   labourMinutes: number;
   bid: Bid;
+  /** Placeholders used; absent or empty when every item came from the price book. */
+  placeholders?: PlaceholderLine[];
 }

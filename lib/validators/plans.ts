@@ -28,6 +28,7 @@ export const sheetUpdateSchema = nonEmpty(
       version,
       label: text("Sheet label", 40).optional(),
       unitTypeId: uuid.nullable().optional(),
+      countRole: z.enum(["counted", "reference"], { error: "Count role is counted or reference." }).optional(),
       scale: z
         .object({
           ratio: z.number({ error: "Scale ratio must be a number." }).positive("Scale ratio must be more than zero.").max(100_000),
@@ -108,3 +109,6 @@ export type TagUpdateInput = z.infer<typeof tagUpdateSchema>;
 
 /** `?version=N` on a DELETE: the version the client last saw. */
 export const versionParam = z.coerce.number({ error: "Give ?version=N: reload and try again." }).int().min(1);
+
+/** `?tags=N` on a DELETE that takes tags with it: how many the person agreed to remove. */
+export const confirmTagsParam = z.coerce.number({ error: "Give ?tags=N: the number of tags you agreed to delete." }).int().min(0).max(10_000_000);

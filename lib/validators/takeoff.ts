@@ -7,6 +7,8 @@ export const runTakeoffSchema = z.object({
   priceBookId: uuid,
   /** An alternate: price every window with this casing instead of each type's own. */
   casingItemId: uuid.nullable().optional(),
+  /** Price what the price book lacks with marked placeholders instead of refusing; such a takeoff cannot be submitted. */
+  allowPlaceholders: z.boolean({ error: "allowPlaceholders is true or false." }).optional(),
 });
 export type RunTakeoffInput = z.infer<typeof runTakeoffSchema>;
 

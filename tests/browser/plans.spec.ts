@@ -83,10 +83,11 @@ test("upload, calibrate, tag four openings of two types, count, reload", async (
 
   const counts = page.locator("section", { has: page.getByRole("heading", { name: "Counts" }) });
   const expectCounts = async () => {
-    // Sheet, Type A × 12, Job: two of each type on the sheet, 24 of each in the job.
-    await expect(counts.getByRole("row", { name: /W1/ })).toContainText(/2\s*24\s*24/);
-    await expect(counts.getByRole("row", { name: /W2/ })).toContainText(/2\s*24\s*24/);
-    await expect(counts.getByRole("row", { name: /Total/ })).toContainText(/4\s*48\s*48/);
+    // This sheet, Type A one unit, all 12 units, Job: two of each type on the sheet and per unit, 24 of each in the job.
+    await expect(counts.getByRole("columnheader", { name: "This sheet" })).toBeVisible();
+    await expect(counts.getByRole("row", { name: /W1/ })).toContainText(/2\s*2\s*24\s*24/);
+    await expect(counts.getByRole("row", { name: /W2/ })).toContainText(/2\s*2\s*24\s*24/);
+    await expect(counts.getByRole("row", { name: /Total/ })).toContainText(/4\s*4\s*48\s*48/);
   };
   await test.step("counts per sheet, per unit type and for the job", expectCounts);
 

@@ -21,6 +21,9 @@ import * as openingTypeRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]
 import * as tagsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/route";
 import * as tagRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/[tagId]/route";
 import * as countsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/counts/route";
+import * as planSetRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/plan-sets/[planSetId]/route";
+import * as planSetsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/plan-sets/route";
+import * as priceGapsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/price-gaps/route";
 import * as priceBooksRoute from "@/app/api/orgs/[orgSlug]/price-books/route";
 import * as priceBookRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/route";
 import * as priceBookItemsRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/items/route";
@@ -85,6 +88,10 @@ routes.push(
   { name: "move a tag", handler: tagRoute.PATCH, method: "PATCH", params: (w) => ({ ...proj(w), tagId: w.plans.tag.id }), body: () => ({ version: 1, x: 500, y: 320 }), allowed: writers, okStatus: 200 },
   { name: "delete a tag", handler: tagRoute.DELETE, method: "DELETE", path: "/api/x?version=1", params: (w) => ({ ...proj(w), tagId: w.plans.tag.id }), allowed: writers, okStatus: 204 },
   { name: "read counts", handler: countsRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
+  { name: "delete a sheet", handler: sheetRoute.DELETE, method: "DELETE", path: "/api/x?version=1", params: (w) => ({ ...proj(w), sheetId: w.plans.commonSheet.id }), allowed: writers, okStatus: 204 },
+  { name: "list plan sets", handler: planSetsRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
+  { name: "delete a plan set", handler: planSetRoute.DELETE, method: "DELETE", path: "/api/x?tags=1", params: (w) => ({ ...proj(w), planSetId: w.plans.planSetId }), allowed: writers, okStatus: 204 },
+  { name: "check the window list against a price book", handler: priceGapsRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
 );
 
 const book = (w: World) => ({ ...org(w), priceBookId: w.priceBook.book.id });

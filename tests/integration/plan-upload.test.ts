@@ -3,6 +3,7 @@
  * stand-in → the stand-in's callback → the app reads the bytes back with pdf.js and saves sheets. A file
  * that is not a usable PDF leaves no plan set, no sheet and no stored file.
  */
+import { createHash } from "node:crypto";
 import { readdir, readFile, mkdtemp, rm } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
@@ -80,6 +81,8 @@ describe("uploading a plan set", () => {
     ]);
     const [set] = await db.select().from(planSets).where(eq(planSets.id, result.planSetId));
     expect(await storedKeys()).toContain(set!.fileKey);
+    // The digest of the bytes as the server read them back: a second upload of this file is recognised by it.
+    expect(set!.contentHash).toBe(createHash("sha256").update(bytes).digest("hex"));
 
     // The bytes come back through the tenancy-checked file route, unchanged.
     const res = await fileRoute.GET(

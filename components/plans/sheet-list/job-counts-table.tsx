@@ -26,6 +26,9 @@ export function JobCountsTable({ counts, openingTypes }: { counts: CountsView; o
         </p>
       }
     >
+      <p className="mb-2 text-xs text-graphite-700">
+        Unit types count from their counted sheets only; reference views (enlarged plans, repeats) add nothing.
+      </p>
       {types.length === 0 ? (
         <p className="text-sm text-graphite-600">The window list is empty: add opening types, then tag them on the sheets.</p>
       ) : (

@@ -22,10 +22,14 @@ export interface PlanSetGroupProps {
   notices: Record<string, SheetNotice>;
   onDismiss: (sheetId: string) => void;
   onSave: (sheet: SheetView, patch: SheetPatch) => Promise<Record<string, string> | null>;
+  warningsFor: (sheetId: string) => string[];
+  onRemoveSheet: (sheet: SheetView) => void;
+  onRemoveSet: (planSetId: string, name: string, sheets: SheetView[]) => void;
 }
 
 /** One uploaded PDF and its sheets; the PDF is loaded once here for all of their thumbnails. */
-export function PlanSetGroup({ orgSlug, projectId, planSetId, name, sheets, unitTypes, canWrite, notices, onDismiss, onSave }: PlanSetGroupProps) {
+export function PlanSetGroup(props: PlanSetGroupProps) {
+  const { orgSlug, projectId, planSetId, name, sheets, unitTypes, canWrite, notices, onDismiss, onSave, warningsFor, onRemoveSheet, onRemoveSet } = props;
   const [pdf, setPdf] = useState<PlanSetPdf>({ pdf: null, state: "loading" });
   // A long set folds away so the next one is in reach; folded rows draw no thumbnails.
   const [open, setOpen] = useState(true);
@@ -47,6 +51,11 @@ export function PlanSetGroup({ orgSlug, projectId, planSetId, name, sheets, unit
           <span className="num">{sheets.length}</span> sheet{sheets.length === 1 ? "" : "s"} · <span className="num">{calibrated}</span> calibrated ·{" "}
           <span className="num">{tags}</span> tag{tags === 1 ? "" : "s"}
           {pdf.state === "unavailable" && <span className="ml-2 text-graphite-600">(previews unavailable: the file could not be read)</span>}
+          {canWrite && (
+            <button type="button" className="ml-3 font-medium text-alarm-700 underline" onClick={() => onRemoveSet(planSetId, name, sheets)} aria-label={`Delete plan set ${name}`}>
+              Delete set
+            </button>
+          )}
         </p>
       </header>
       <PdfDocument
@@ -68,6 +77,8 @@ export function PlanSetGroup({ orgSlug, projectId, planSetId, name, sheets, unit
               notice={notices[sheet.id]}
               onDismiss={onDismiss}
               onSave={onSave}
+              warnings={warningsFor(sheet.id)}
+              onRemove={onRemoveSheet}
             />
           ))}
         </ul>

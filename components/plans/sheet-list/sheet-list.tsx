@@ -24,6 +24,9 @@ export function SheetList(props: {
   notices: Record<string, SheetNotice>;
   onDismiss: (sheetId: string) => void;
   onSave: (sheet: SheetView, patch: SheetPatch) => Promise<Record<string, string> | null>;
+  warningsFor: (sheetId: string) => string[];
+  onRemoveSheet: (sheet: SheetView) => void;
+  onRemoveSet: (planSetId: string, name: string, sheets: SheetView[]) => void;
 }) {
   const { sheets, ...rest } = props;
   if (sheets.length === 0) {

@@ -9,7 +9,7 @@ import { unitTypesKey, unitTypesQuery } from "@/lib/client/unit-types";
 import type { SheetView } from "@/lib/plans/api-types";
 import { PlansApiError, plansApi, projectApi } from "@/lib/plans/window-list/request";
 
-export type SheetPatch = { label?: string; unitTypeId?: string | null };
+export type SheetPatch = { label?: string; unitTypeId?: string | null; countRole?: SheetView["countRole"] };
 export type SheetNotice = { text: string; current: SheetView | null };
 
 /** Everything the plans page reads, and the sheet edits with their stale-edit recovery. */
@@ -39,7 +39,7 @@ export function usePlansData(orgSlug: string, projectId: string) {
         body: { version: sheet.version, ...patch },
       });
       putSheet(saved);
-      if (patch.unitTypeId !== undefined) void queryClient.invalidateQueries({ queryKey: countsKey(scope) });
+      if (patch.unitTypeId !== undefined || patch.countRole !== undefined) void queryClient.invalidateQueries({ queryKey: countsKey(scope) });
       return null;
     } catch (error) {
       if (error instanceof PlansApiError && error.status === 409 && error.current !== undefined) {

@@ -1,11 +1,34 @@
 "use client";
 
-import { DeleteRowButton } from "@/components/ui/delete-row-button";
-import type { OpeningTypeView } from "@/lib/plans/api-types";
+import { useState } from "react";
+import { ConfirmRemoval, RemovalSummary } from "@/components/plans/confirm-removal";
+import { Button } from "@/components/ui/button";
+import type { WindowListRow } from "./table-columns";
 import { useWindowListControls } from "./window-list-context";
 
-export function RowActions({ row }: { row: OpeningTypeView }) {
+/** The row's delete: asks first, naming the tags and counted openings that go with the type. */
+export function RowActions({ row }: { row: WindowListRow }) {
   const { canWrite, remove, removing } = useWindowListControls();
+  const [asking, setAsking] = useState(false);
   if (!canWrite) return null;
-  return <DeleteRowButton what={row.mark} question={`Delete opening type ${row.mark} from the window list?`} busy={removing === row.id} onDelete={() => remove(row)} />;
+  const busy = removing === row.id;
+  return (
+    <>
+      <Button look="danger" className="px-1.5 py-0.5 text-xs" title={`Delete ${row.mark}`} aria-label={`Delete ${row.mark}`} disabled={busy} onClick={() => setAsking(true)}>
+        {busy ? "…" : <span aria-hidden>✕</span>}
+      </Button>
+      <ConfirmRemoval
+        open={asking}
+        title={`Delete opening type ${row.mark} from the window list?`}
+        confirmLabel={row.tags > 0 ? `Delete ${row.mark} and its tags` : `Delete ${row.mark}`}
+        onCancel={() => setAsking(false)}
+        onConfirm={() => {
+          setAsking(false);
+          remove({ ...row, tags: row.tags });
+        }}
+      >
+        <RemovalSummary tags={row.tags} openings={row.count} />
+      </ConfirmRemoval>
+    </>
+  );
 }

@@ -8,7 +8,12 @@ import { RowActions } from "./row-actions";
 import { WindowListCell } from "./window-list-cell";
 
 /** A window-list line with how many of it the job has (from the tags), so the table can sort on it. */
-export type WindowListRow = OpeningTypeView & { count: number };
+export type WindowListRow = OpeningTypeView & {
+  /** Openings of this type the job counts; `tags`: the tags placed for it on every sheet. */
+  count: number;
+  tags: number;
+  gaps?: { message: string; fix: string }[];
+};
 
 type ColumnMeta = { align?: "end"; column?: ColumnId; width?: string };
 

@@ -51,7 +51,9 @@ export function useWindowList(orgSlug: string, projectId: string, canWrite: bool
       plansApi<{ openingType: OpeningTypeView }>(`${base}/opening-types/${row.id}`, { method: "PATCH", body }),
   });
   const del = useMutation({
-    mutationFn: (row: OpeningTypeView) => plansApi<void>(`${base}/opening-types/${row.id}?version=${row.version}`, { method: "DELETE" }),
+    // `tags`: how many tags the person was told go with the type; the server refuses if that is no longer so.
+    mutationFn: (row: OpeningTypeView & { tags?: number }) =>
+      plansApi<void>(`${base}/opening-types/${row.id}?version=${row.version}&tags=${row.tags ?? 0}`, { method: "DELETE" }),
     onSuccess: (_, row) => {
       dropRow(row.id);
       notify(row.id, null);

@@ -19,7 +19,8 @@ export interface WindowListControls {
   stopEdit: (rowId: string, column: EditableColumn) => void;
   /** Resolves to the field errors to show (keyed like the API's), or null when the edit is done. */
   commit: (row: OpeningTypeView, edit: CellEdit) => Promise<Record<string, string> | null>;
-  remove: (row: OpeningTypeView) => void;
+  /** Deletes the type and, as the person confirmed, its `tags` tags. */
+  remove: (row: OpeningTypeView & { tags?: number }) => void;
   removing: string | null;
   notices: Record<string, RowNotice>;
   dismiss: (rowId: string) => void;

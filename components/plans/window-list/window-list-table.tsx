@@ -70,6 +70,16 @@ export function WindowListTable({ rows }: { rows: WindowListRow[] }) {
                       );
                     })}
                 </tr>
+                {(row.original.gaps ?? []).map((g) => (
+                  <tr key={g.message} data-gap={row.original.mark}>
+                    <td colSpan={visible.length} className="px-1.5 pb-2 text-xs text-graphite-900">
+                      <span className="rounded border border-brass-500 bg-maple-100 px-1.5 py-0.5">
+                        <span aria-hidden>△ </span>
+                        <strong>Price book gap:</strong> {g.message} {g.fix}
+                      </span>
+                    </td>
+                  </tr>
+                ))}
                 {notice && (
                   <tr>
                     <td colSpan={visible.length} className={`px-1.5 pb-2 text-xs font-medium ${notice.tone === "error" ? "text-alarm-700" : "text-graphite-700"}`} role="alert">

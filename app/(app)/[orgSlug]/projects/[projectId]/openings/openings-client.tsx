@@ -4,6 +4,8 @@ import { useMemo } from "react";
 import { Notice } from "@/components/ui/card";
 import { NewOpeningForm } from "@/components/plans/window-list/new-opening-form";
 import type { WindowListRow } from "@/components/plans/window-list/table-columns";
+import { PriceGapsBar } from "@/components/plans/window-list/price-gaps-bar";
+import { usePriceGaps } from "@/components/plans/window-list/use-price-gaps";
 import { useWindowList } from "@/components/plans/window-list/use-window-list";
 import { WindowListContext } from "@/components/plans/window-list/window-list-context";
 import { WindowListTable } from "@/components/plans/window-list/window-list-table";
@@ -11,10 +13,21 @@ import { WindowListTable } from "@/components/plans/window-list/window-list-tabl
 export function OpeningsView({ orgSlug, projectId, canWrite }: { orgSlug: string; projectId: string; canWrite: boolean }) {
   const { types, counts, controls, added } = useWindowList(orgSlug, projectId, canWrite);
   const job = counts.data?.job;
+  const sheetCounts = counts.data?.sheets;
+  // Any edit of the list bumps a version: the gap check is re-read for it.
+  const typesVersion = (types.data ?? []).map((t) => `${t.id}:${t.version}`).join();
+  const priceGaps = usePriceGaps(orgSlug, projectId, typesVersion);
+  const gapList = priceGaps.gaps.data?.gaps;
   // Stable rows: TanStack Table recomputes its models whenever the array changes.
   const rows = useMemo<WindowListRow[]>(
-    () => (types.data ?? []).map((t) => ({ ...t, count: job?.[t.id] ?? 0 })),
-    [types.data, job],
+    () =>
+      (types.data ?? []).map((t) => ({
+        ...t,
+        count: job?.[t.id] ?? 0,
+        tags: (sheetCounts ?? []).reduce((n, s) => n + (s.byType[t.id] ?? 0), 0),
+        gaps: gapList?.filter((g) => g.openingTypeId === t.id),
+      })),
+    [types.data, job, sheetCounts, gapList],
   );
   const total = counts.data?.jobTotal;
 
@@ -31,6 +44,7 @@ export function OpeningsView({ orgSlug, projectId, canWrite }: { orgSlug: string
       {types.isError && <Notice tone="error">{types.error.message}</Notice>}
       {counts.isError && <Notice tone="error">Counts are unavailable: {counts.error.message}</Notice>}
       {types.isPending && <p className="text-sm text-graphite-600">Loading the window list…</p>}
+      {types.data && types.data.length > 0 && <PriceGapsBar {...priceGaps} />}
       <WindowListContext value={controls}>
         {types.data && rows.length === 0 && (
           <p className="rounded-lg border border-dashed border-maple-300 bg-white p-6 text-sm text-graphite-700">

@@ -1,6 +1,11 @@
 "use client";
 
 import { Notice } from "@/components/ui/card";
+import { ConfirmRemoval, RemovalSummary } from "@/components/plans/confirm-removal";
+import { CountWarnings } from "@/components/plans/sheet-list/count-warnings";
+import { useRemoval } from "@/components/plans/sheet-list/use-removal";
+import type { SheetView } from "@/lib/plans/api-types";
+import { sheetsImpact } from "@/lib/plans/removal-impact";
 import { PlanUpload } from "@/components/plans/plan-upload";
 import { JobCountsTable } from "@/components/plans/sheet-list/job-counts-table";
 import { SheetList } from "@/components/plans/sheet-list/sheet-list";
@@ -11,10 +16,32 @@ export function PlansView({ orgSlug, projectId, canWrite }: { orgSlug: string; p
   const data = usePlansData(orgSlug, projectId);
   const { sheets, unitTypes, counts, openingTypes } = data;
   const units = unitTypes.data ?? [];
+  const removal = useRemoval(orgSlug, projectId);
+  const warnings = counts.data?.warnings ?? [];
+  const warningsFor = (sheetId: string) => warnings.filter((w) => w.sheetIds.includes(sheetId)).map((w) => w.message);
+  const impactOf = (ids: string[]) => (counts.data ? sheetsImpact(counts.data, new Set(ids)) : { tags: 0, openings: 0 });
+  const removeSheet = (sheet: SheetView) =>
+    removal.ask({
+      title: `Delete sheet ${sheet.label}?`,
+      confirmLabel: "Delete sheet",
+      path: `${data.base}/sheets/${sheet.id}?version=${sheet.version}`,
+      // The sheet's own tag count is what the server checks; the counts say how many openings they are.
+      ...impactOf([sheet.id]),
+      tags: sheet.tagCount,
+    });
+  const removeSet = (planSetId: string, name: string, setSheets: SheetView[]) =>
+    removal.ask({
+      title: `Delete plan set ${name} (${setSheets.length} sheet${setSheets.length === 1 ? "" : "s"})?`,
+      confirmLabel: "Delete plan set",
+      path: `${data.base}/plan-sets/${planSetId}`,
+      ...impactOf(setSheets.map((s) => s.id)),
+      tags: setSheets.reduce((n, s) => n + s.tagCount, 0),
+    });
 
   return (
     <div className="space-y-6">
       <h1 className="text-2xl font-bold">Plans</h1>
+      <CountWarnings warnings={warnings} />
       {canWrite && (
         <section aria-label="Upload a plan set">
           <PlanUpload orgSlug={orgSlug} projectId={projectId} onUploaded={data.refetch} />
@@ -38,6 +65,9 @@ export function PlansView({ orgSlug, projectId, canWrite }: { orgSlug: string; p
               notices={data.notices}
               onDismiss={data.dismiss}
               onSave={data.saveSheet}
+              warningsFor={warningsFor}
+              onRemoveSheet={removeSheet}
+              onRemoveSet={removeSet}
             />
           )}
         </section>
@@ -48,6 +78,17 @@ export function PlansView({ orgSlug, projectId, canWrite }: { orgSlug: string; p
       </div>
       {counts.isError && <Notice tone="error">Counts are unavailable: {counts.error.message}</Notice>}
       {counts.data && openingTypes.data && <JobCountsTable counts={counts.data} openingTypes={openingTypes.data} />}
+      <ConfirmRemoval
+        open={removal.pending !== null}
+        title={removal.pending?.title ?? ""}
+        confirmLabel={removal.pending?.confirmLabel ?? "Delete"}
+        busy={removal.busy}
+        error={removal.error}
+        onConfirm={() => void removal.confirm()}
+        onCancel={removal.cancel}
+      >
+        {removal.pending && <RemovalSummary tags={removal.pending.tags} openings={removal.pending.openings} />}
+      </ConfirmRemoval>
     </div>
   );
 }

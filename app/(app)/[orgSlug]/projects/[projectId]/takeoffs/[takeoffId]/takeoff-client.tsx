@@ -7,6 +7,7 @@ import { BoardOrderTable } from "@/components/takeoffs/board-order-table";
 import { CostChart } from "@/components/takeoffs/cost-chart";
 import { JobMaterials } from "@/components/takeoffs/job-materials";
 import { OpeningTypeSection } from "@/components/takeoffs/opening-type-section";
+import { PlaceholderNotice } from "@/components/takeoffs/placeholder-notice";
 import { PrintSheet } from "@/components/takeoffs/print-sheet";
 import { TakeoffHeader } from "@/components/takeoffs/takeoff-header";
 import { UnitTypeTotals } from "@/components/takeoffs/unit-type-totals";
@@ -55,6 +56,7 @@ export function TakeoffResultView({
     <div className="space-y-8">
       <PrintSheet />
       <TakeoffHeader t={t} listHref={takeoffsPage(orgSlug, projectId)} />
+      <PlaceholderNotice result={result} />
       <TakeoffActions orgSlug={orgSlug} projectId={projectId} takeoffId={t.id} status={t.status} canSubmit={canSubmit} canRun={canRun} />
       <Part id="per-opening" title="Per opening type" intro="What each window gets, as the crew cuts it.">
         <div className="space-y-4">

@@ -1,9 +1,10 @@
-// GET /api/orgs/[orgSlug]/projects/[projectId]/sheets/[sheetId] — one sheet; PATCH — label, unit type, scale, calibration
+// GET /api/orgs/[orgSlug]/projects/[projectId]/sheets/[sheetId] — one sheet; PATCH — label, unit type, count role, scale, calibration; DELETE ?version=N[&tags=N] — remove it and its tags
 import { NextResponse } from "next/server";
-import { getSheet, updateSheet } from "@/db/queries/sheets";
+import { deleteSheet, getSheet, updateSheet } from "@/db/queries/sheets";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
-import { parseId, readJson } from "@/lib/api/read-input";
+import { readConfirmedTags } from "@/lib/api/read-confirm";
+import { parseId, readJson, readVersion } from "@/lib/api/read-input";
 import { sheetUpdateSchema } from "@/lib/validators/plans";
 
 type Params = { orgSlug: string; projectId: string; sheetId: string };
@@ -19,6 +20,14 @@ export const PATCH = withOrg<Params>(
     const scope = projectScope(org, params);
     const id = parseId(params.sheetId, "sheet");
     return NextResponse.json({ sheet: await updateSheet(scope, id, await readJson(req, sheetUpdateSchema)) });
+  },
+  { permission: "plans.write" },
+);
+
+export const DELETE = withOrg<Params>(
+  async ({ req, params, org }) => {
+    await deleteSheet(projectScope(org, params), parseId(params.sheetId, "sheet"), readVersion(req), readConfirmedTags(req));
+    return new NextResponse(null, { status: 204 });
   },
   { permission: "plans.write" },
 );

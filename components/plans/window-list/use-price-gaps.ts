@@ -1,0 +1,26 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { useState } from "react";
+import type { PriceGapsView } from "@/db/queries/price-gaps";
+import type { PriceBookListEntry } from "@/lib/price-book/types";
+import { plansApi, projectApi } from "@/lib/plans/window-list/request";
+
+/**
+ * The window list checked against a price book, re-read whenever the list or the chosen book changes
+ * (the opening-types key is part of this query's key, so an edit that opens or closes a gap shows at once).
+ */
+export function usePriceGaps(orgSlug: string, projectId: string, typesVersion: string) {
+  const [priceBookId, setPriceBookId] = useState<string | null>(null);
+  const books = useQuery({
+    queryKey: ["price-books", orgSlug],
+    queryFn: () => plansApi<{ priceBooks: PriceBookListEntry[] }>(`/api/orgs/${orgSlug}/price-books`),
+  });
+  const gaps = useQuery({
+    queryKey: ["price-gaps", orgSlug, projectId, priceBookId, typesVersion],
+    queryFn: () =>
+      plansApi<PriceGapsView>(`${projectApi(orgSlug, projectId)}/price-gaps${priceBookId ? `?priceBookId=${encodeURIComponent(priceBookId)}` : ""}`),
+    placeholderData: (previous) => previous,
+  });
+  return { books, gaps, priceBookId: priceBookId ?? gaps.data?.priceBook?.id ?? null, choose: setPriceBookId };
+}

@@ -1,0 +1,144 @@
+import { formatLength, type CutPiece, type Material, type TrimSpec } from "@/takeoff";
+import { checkOpening, type OpeningProblem } from "./opening-check";
+import { findItems, unitPrice, type ItemGap } from "./pick-items";
+import type { PriceItemSnapshot, TakeoffPrices } from "./types";
+
+const PART_NAMES: Record<CutPiece["part"], string> = {
+  "casing-leg": "casing leg",
+  "casing-head": "casing head",
+  "casing-bottom": "bottom casing",
+  stool: "stool",
+  apron: "apron",
+  "apron-return": "apron return",
+  "extension-side": "jamb extension side",
+  "extension-head": "jamb extension head",
+  "extension-bottom": "jamb extension bottom",
+};
+
+/** One line of the window list as the takeoff sees it. */
+export interface OpeningTypeInput {
+  id: string;
+  mark: string;
+  width: number;
+  height: number;
+  setback: number;
+  trimSpec: TrimSpec;
+}
+
+/** A gap: what one opening type needs that the book cannot supply, and what would close it. */
+export interface PriceGap extends ItemGap {
+  openingTypeId: string;
+  mark: string;
+  kind: "no-item" | "too-long";
+  /** The longest piece of this material the type needs (a placeholder's stock must hold it). */
+  longestPiece: number;
+  /** The real item a too-long piece would otherwise be cut from. */
+  itemId?: string;
+  fix: string;
+}
+
+export type Assessment =
+  | { ok: true; spec: TrimSpec; pieces: CutPiece[]; picked: Partial<Record<Material, PriceItemSnapshot>>; gaps: PriceGap[] }
+  | { ok: false; problem: OpeningProblem & { mark: string; openingTypeId: string } };
+
+const longestStock = (i: PriceItemSnapshot) => Math.max(...i.stock.map((s) => s.length));
+
+/**
+ * One opening type against one price book: its cut list (or why it has none), the item each material
+ * comes from, and the gaps — a size the book does not carry, or a piece longer than every stock length
+ * of its item after the saw kerf.
+ */
+export function assessOpeningType(ot: OpeningTypeInput, prices: TakeoffPrices, kerf: number, override: PriceItemSnapshot | null): Assessment {
+  const spec = override ? { ...ot.trimSpec, casingWidth: override.faceWidth, casingThickness: override.thickness } : ot.trimSpec;
+  const checked = checkOpening({ width: ot.width, height: ot.height, setback: ot.setback }, spec);
+  if ("problem" in checked) return { ok: false, problem: { ...checked.problem, mark: ot.mark, openingTypeId: ot.id } };
+  const pieces = checked.pieces;
+  const widthOf = (m: Material) => pieces.find((p) => p.material === m && p.width !== undefined)?.width;
+  const longest = (m: Material) => Math.max(0, ...pieces.filter((p) => p.material === m).map((p) => p.length));
+  const { picked, gaps: itemGaps } = findItems(prices.items, ot.mark, spec, { stool: widthOf("stool"), extension: widthOf("extension") }, override);
+  const gaps: PriceGap[] = itemGaps.map((g) => ({
+    ...g,
+    openingTypeId: ot.id,
+    mark: ot.mark,
+    kind: "no-item",
+    longestPiece: longest(g.material),
+    fix: `Add ${g.material === "extension" ? "extension stock" : g.material} of that size to the price book, or run with a placeholder price.`,
+  }));
+  for (const [material, item] of Object.entries(picked) as [Material, PriceItemSnapshot][]) {
+    const piece = pieces.filter((p) => p.material === material).sort((a, b) => b.length - a.length)[0];
+    if (!piece || piece.length + kerf <= longestStock(item)) continue;
+    const need = Math.ceil((piece.length + kerf) / 12) * 12;
+    gaps.push({
+      material,
+      width: item.faceWidth,
+      thickness: item.thickness,
+      openingTypeId: ot.id,
+      mark: ot.mark,
+      kind: "too-long",
+      longestPiece: piece.length,
+      itemId: item.id,
+      message: `${ot.mark}'s ${PART_NAMES[piece.part]} is ${formatLength(piece.length, { style: "feet-inches" })} long, but the longest stock of “${item.name}” is ${formatLength(longestStock(item), { style: "feet-inches" })}.`,
+      fix: `Add a ${formatLength(need, { style: "feet-inches" })} length to “${item.name}” in the price book, check ${ot.mark}'s width and height (${formatLength(ot.width)} × ${formatLength(ot.height)}), or run with a placeholder price.`,
+    });
+    delete picked[material];
+  }
+  return { ok: true, spec, pieces, picked, gaps };
+}
+
+/** A stand-in item for a gap, clearly named as one, priced at a real item's rate per inch where the book has one. */
+export interface Placeholder {
+  item: PriceItemSnapshot;
+  material: Material;
+  marks: string[];
+  gaps: string[];
+  /** How the price was set: "at the rate of …", or "$0: nothing like it in the price book". */
+  basis: string;
+}
+
+const placeholderKey = (g: PriceGap) => `${g.material}|${g.kind === "too-long" ? g.itemId : `${g.width}x${g.thickness}`}`;
+
+/**
+ * Placeholders for every gap, one per material and size: stock long enough for the longest piece
+ * (whole feet, at least 8'), priced at the rate per inch of the nearest real item of that kind — the
+ * item itself for a too-long piece — so the bid is not short by the whole material. Marked so a bid
+ * built on one is refused until the price book has the real item.
+ */
+export function placeholdersFor(gaps: PriceGap[], prices: TakeoffPrices, kerf: number): Map<string, Placeholder> {
+  const out = new Map<string, Placeholder>();
+  for (const g of gaps) {
+    const key = placeholderKey(g);
+    const length = Math.max(96, Math.ceil((g.longestPiece + kerf) / 12) * 12);
+    const existing = out.get(key);
+    if (existing) {
+      const stock = existing.item.stock[0]!;
+      if (length > stock.length) existing.item.stock = [{ length, price: Math.round((stock.price / stock.length) * length * 100) / 100 }];
+      if (!existing.marks.includes(g.mark)) existing.marks.push(g.mark);
+      existing.gaps.push(g.message);
+      continue;
+    }
+    const kind = g.material === "apron" ? ["apron", "casing"] : [g.material];
+    const like =
+      (g.itemId ? prices.items.find((i) => i.id === g.itemId) : undefined) ??
+      prices.items.filter((i) => kind.includes(i.kind)).sort((a, b) => Math.abs(a.faceWidth - g.width) - Math.abs(b.faceWidth - g.width))[0];
+    const rate = like ? unitPrice(like) : 0;
+    out.set(key, {
+      material: g.material,
+      marks: [g.mark],
+      gaps: [g.message],
+      basis: like ? `at the rate per foot of “${like.name}”` : `$0: the price book has no ${g.material} to price it from`,
+      item: {
+        id: `placeholder:${key}`,
+        name: `PLACEHOLDER ${g.material} ${g.kind === "too-long" ? `${formatLength(length, { style: "feet-inches" })} long` : `${formatLength(g.width)}${g.thickness ? ` × ${formatLength(g.thickness)}` : " wide"}`} (not in the price book)`,
+        kind: g.material,
+        faceWidth: g.width,
+        thickness: g.thickness,
+        species: null,
+        supplierCode: null,
+        stock: [{ length, price: Math.round(rate * length * 100) / 100 }],
+      },
+    });
+  }
+  return out;
+}
+
+export const placeholderFor = (placeholders: Map<string, Placeholder>, g: PriceGap) => placeholders.get(placeholderKey(g));

@@ -2,6 +2,7 @@
 
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
+import { projectKey } from "@/lib/client/project-scope";
 
 /** What the person is asked about: the thing, how to delete it, and what goes with it. */
 export interface RemovalRequest {
@@ -24,7 +25,8 @@ export function useRemoval(orgSlug: string, projectId: string) {
   const [error, setError] = useState<string | null>(null);
 
   const refresh = () => {
-    for (const what of ["sheets", "counts", "plan-sets"]) void queryClient.invalidateQueries({ queryKey: [what, orgSlug, projectId] });
+    // Sheets, counts, tags and plan sets all sit under the project's key prefix.
+    void queryClient.invalidateQueries({ queryKey: projectKey({ orgSlug, projectId }) });
   };
 
   async function confirm() {

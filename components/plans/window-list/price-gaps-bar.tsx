@@ -4,7 +4,7 @@ import type { usePriceGaps } from "./use-price-gaps";
 
 /** Which price book the window list is checked against, and how many of its lines that book cannot price. */
 export function PriceGapsBar({ books, gaps, priceBookId, choose }: ReturnType<typeof usePriceGaps>) {
-  const list = books.data?.priceBooks ?? [];
+  const list = books.data ?? [];
   const found = gaps.data?.gaps ?? [];
   const marks = [...new Set(found.map((g) => g.mark))];
   if (books.data && list.length === 0) {

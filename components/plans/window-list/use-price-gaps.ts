@@ -3,7 +3,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import type { PriceGapsView } from "@/db/queries/price-gaps";
-import type { PriceBookListEntry } from "@/lib/price-book/types";
+import { priceBooksQuery } from "@/lib/client/price-books";
 import { plansApi, projectApi } from "@/lib/plans/window-list/request";
 
 /**
@@ -12,10 +12,7 @@ import { plansApi, projectApi } from "@/lib/plans/window-list/request";
  */
 export function usePriceGaps(orgSlug: string, projectId: string, typesVersion: string) {
   const [priceBookId, setPriceBookId] = useState<string | null>(null);
-  const books = useQuery({
-    queryKey: ["price-books", orgSlug],
-    queryFn: () => plansApi<{ priceBooks: PriceBookListEntry[] }>(`/api/orgs/${orgSlug}/price-books`),
-  });
+  const books = useQuery(priceBooksQuery(orgSlug));
   const gaps = useQuery({
     queryKey: ["price-gaps", orgSlug, projectId, priceBookId, typesVersion],
     queryFn: () =>

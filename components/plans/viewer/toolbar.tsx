@@ -82,10 +82,12 @@ export function Toolbar(p: Props) {
         +
       </Btn>
       <Btn onClick={() => p.fit("width")} aria-label="Fit width">
-        <Wide>Fit </Wide>width <Kbd>0</Kbd>
+        <Wide>Fit width</Wide>
+        <span className="xl:hidden">Width</span> <Kbd>0</Kbd>
       </Btn>
       <Btn onClick={() => p.fit("page")} aria-label="Whole page">
-        <Wide>Whole </Wide>page
+        <Wide>Whole page</Wide>
+        <span className="xl:hidden">Page</span>
       </Btn>
       <Btn onClick={() => p.fit("actual")} title="Real paper size (Shift+0)">
         100%

@@ -11,6 +11,7 @@ export * from "./tables/projects";
 export * from "./tables/plans";
 export * from "./tables/price-books";
 export * from "./tables/takeoffs";
+export * from "./tables/uploads";
 
 export const organisationsRelations = relations(organisations, ({ many }) => ({
   memberships: many(memberships),

@@ -15,7 +15,7 @@ const ms = (x: number) => `${Math.round(x)} ms`;
 const stamp = Date.now().toString(36);
 const { user, organisation } = await signUpUser({ name: "Bench Estimator", email: `bench-${stamp}@example.test`, password: "bench-password-1", organisationName: `Bench Trim ${stamp}` });
 const project = await createProject({ orgId: organisation.id, userId: user.id, input: { name: "Bench job" } });
-const token = await encode({ token: { sub: user.id, name: user.name, email: user.email }, secret: process.env.NEXTAUTH_SECRET! });
+const token = await encode({ token: { sub: user.id, name: user.name, email: user.email, sv: 0 }, secret: process.env.NEXTAUTH_SECRET! });
 
 const browser = await chromium.launch({
   executablePath: "/usr/bin/chromium",

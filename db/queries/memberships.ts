@@ -2,6 +2,7 @@ import { and, asc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { memberships, organisations, users, type Role } from "../schema";
 import { conflict, notFound } from "@/lib/errors";
+import { bumpSessionVersion } from "./users";
 
 export interface OrgContext {
   orgId: string;
@@ -12,7 +13,10 @@ export interface OrgContext {
 }
 
 /** The caller's membership in the organisation at this slug, or null — "not a member" and "no such org" look the same. */
-export async function getOrgContext(userId: string, orgSlug: string): Promise<OrgContext | null> {
+export async function getOrgContext(
+  session: { userId: string; sessionVersion: number },
+  orgSlug: string,
+): Promise<OrgContext | null> {
   const [row] = await db
     .select({
       orgId: organisations.id,
@@ -23,7 +27,9 @@ export async function getOrgContext(userId: string, orgSlug: string): Promise<Or
     })
     .from(memberships)
     .innerJoin(organisations, eq(organisations.id, memberships.orgId))
-    .where(and(eq(memberships.userId, userId), eq(organisations.slug, orgSlug)))
+    // The session check rides on this read: a cookie from before sign-out or a password change finds no row.
+    .innerJoin(users, and(eq(users.id, memberships.userId), eq(users.sessionVersion, session.sessionVersion)))
+    .where(and(eq(memberships.userId, session.userId), eq(organisations.slug, orgSlug)))
     .limit(1);
   return row ?? null;
 }
@@ -97,7 +103,12 @@ export async function removeMember({ orgId, membershipId }: { orgId: string; mem
   await db.transaction(async (tx) => {
     const member = await lockMember(tx, orgId, membershipId);
     if (member.role === "admin") await assertAnotherAdmin(tx, orgId, membershipId);
-    await tx.delete(memberships).where(and(eq(memberships.orgId, orgId), eq(memberships.id, membershipId)));
+    const [removed] = await tx
+      .delete(memberships)
+      .where(and(eq(memberships.orgId, orgId), eq(memberships.id, membershipId)))
+      .returning({ userId: memberships.userId });
+    // A removed person's open sessions end too, so nothing they had loaded keeps working anywhere.
+    if (removed) await bumpSessionVersion(removed.userId, tx);
   });
 }
 

@@ -32,7 +32,7 @@ if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib db takeoff public 
 fi
 
 start_service smtp npx tsx scripts/smtp-stand-in.ts
-start_service app npx next start -H 127.0.0.1 -p "$APP_PORT"
+start_service app node scripts/serve.mjs -H 127.0.0.1 -p "$APP_PORT"
 wait_for_http "$NEXTAUTH_URL/sign-in" 60 || { tail -n 30 "$DATA/logs/app.log"; die "the app did not start"; }
 
 cat <<MSG

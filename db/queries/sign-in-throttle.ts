@@ -1,6 +1,7 @@
 import { inArray, sql } from "drizzle-orm";
 import { db } from "../client";
 import { signInThrottle } from "../schema";
+import { UNKNOWN_ADDRESS } from "@/lib/auth/client-address";
 
 /**
  * Anti-automation for anything that checks or sets a password (sign-in, accepting an invitation), after
@@ -28,7 +29,9 @@ type Kind = "pair" | "account" | "address";
 function keysOf(s: ThrottleSubject) {
   const account = s.account?.toLowerCase() ?? null;
   const address = s.address.toLowerCase();
-  const counted: { kind: Kind; key: string }[] = [{ kind: "address", key: `address:${address}` }];
+  // Requests that did not come through our server share the address "unknown"; counting that bucket would
+  // let anyone block everyone, so only the account and pair counters apply to them.
+  const counted: { kind: Kind; key: string }[] = address === UNKNOWN_ADDRESS ? [] : [{ kind: "address", key: `address:${address}` }];
   if (account) counted.push({ kind: "pair", key: `pair:${account} ${address}` }, { kind: "account", key: `account:${account}` });
   return { counted, known: account ? `known:${account} ${address}` : null };
 }

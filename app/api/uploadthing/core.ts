@@ -24,7 +24,9 @@ export const planRouter = {
     .middleware(async ({ req, input, files }) => {
       const session = await sessionFromRequest(req);
       if (!session) throw refuse("FORBIDDEN", "Sign in to upload plans.");
-      const org = await getOrgContext(session, input.orgSlug);
+      const org = await getOrgContext(session, input.orgSlug).catch(() => {
+        throw refuse("FORBIDDEN", "Sign in to upload plans."); // a session that was signed out
+      });
       if (!org) throw refuse("NOT_FOUND", "No such project.");
       if (!can(org.role, "plans.write")) throw refuse("FORBIDDEN", "Your role cannot upload plans.");
       try {

@@ -12,6 +12,7 @@ export * from "./tables/plans";
 export * from "./tables/price-books";
 export * from "./tables/takeoffs";
 export * from "./tables/uploads";
+export * from "./tables/seed-marks";
 
 export const organisationsRelations = relations(organisations, ({ many }) => ({
   memberships: many(memberships),

@@ -33,7 +33,7 @@ export default defineConfig({
     { command: "npx tsx scripts/smtp-stand-in.ts", port: smtpPort, reuseExistingServer: false, timeout: 30_000 },
     { command: "npx tsx scripts/upload-stand-in.ts", port: uploadPort, reuseExistingServer: false, timeout: 30_000 },
     {
-      command: `npx next start -H 127.0.0.1 -p ${appPort}`,
+      command: `node scripts/serve.mjs -H 127.0.0.1 -p ${appPort}`,
       url: `http://127.0.0.1:${appPort}/sign-in`,
       reuseExistingServer: false,
       timeout: 120_000,

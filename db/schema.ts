@@ -11,6 +11,8 @@ export * from "./tables/projects";
 export * from "./tables/plans";
 export * from "./tables/price-books";
 export * from "./tables/takeoffs";
+export * from "./tables/uploads";
+export * from "./tables/seed-marks";
 
 export const organisationsRelations = relations(organisations, ({ many }) => ({
   memberships: many(memberships),

@@ -42,7 +42,7 @@ const prices = testPrices();
 const [book] = await db.insert(priceBooks).values({ orgId: organisation.id, name: "Bench prices (invented)", labour: prices.labour, markup: prices.markup, taxRate: prices.taxRate }).returning({ id: priceBooks.id });
 await db.insert(priceBookItems).values(prices.items.map(({ id: _id, ...i }) => ({ ...i, orgId: organisation.id, priceBookId: book!.id })));
 
-const cookie = `next-auth.session-token=${await encode({ token: { sub: user.id, name: user.name, email: user.email }, secret: process.env.NEXTAUTH_SECRET! })}`;
+const cookie = `next-auth.session-token=${await encode({ token: { sub: user.id, name: user.name, email: user.email, sv: 0 }, secret: process.env.NEXTAUTH_SECRET! })}`;
 const takeoffsUrl = `${base}/api/orgs/${organisation.slug}/projects/${project.id}/takeoffs`;
 const first = await fetch(takeoffsUrl, { method: "POST", headers: { cookie, "content-type": "application/json" }, body: JSON.stringify({ name: "Warm-up", priceBookId: book!.id }) });
 if (first.status !== 201) throw new Error(`takeoff route answered ${first.status}: ${await first.text()}`);

@@ -18,7 +18,7 @@ const { user, organisation } = await signUpUser({ name: "Bench Estimator", email
 const uploadsProject = await createProject({ orgId: organisation.id, userId: user.id, input: { name: "Bench job" } });
 // The dense sheet has a project of its own, so its label is the only link of that name on the Plans page.
 const denseProject = await createProject({ orgId: organisation.id, userId: user.id, input: { name: "Bench dense sheet" } });
-const token = await encode({ token: { sub: user.id, name: user.name, email: user.email }, secret: process.env.NEXTAUTH_SECRET! });
+const token = await encode({ token: { sub: user.id, name: user.name, email: user.email, sv: 0 }, secret: process.env.NEXTAUTH_SECRET! });
 
 const browser = await chromium.launch({
   executablePath: "/usr/bin/chromium",

@@ -16,7 +16,7 @@ if [ ! -f .next-bench/BUILD_ID ] || [ -n "$(find app components lib db takeoff p
   say "building (production)"; npx next build >"$DATA/logs/bench-build.log" 2>&1 || { tail -n 30 "$DATA/logs/bench-build.log"; die "build failed"; }
 fi
 start_service "bench-$name-uploads" npx tsx scripts/upload-stand-in.ts
-start_service "bench-$name-app" npx next start -H 127.0.0.1 -p "$APP_PORT"
+start_service "bench-$name-app" node scripts/serve.mjs -H 127.0.0.1 -p "$APP_PORT"
 trap 'stop_service "bench-$name-app"; stop_service "bench-$name-uploads"' EXIT
 wait_for_port "$UPLOAD_STAND_IN_PORT" 30 || die "upload stand-in did not start"
 wait_for_http "$NEXTAUTH_URL/api/health" 90 || die "the app did not start"

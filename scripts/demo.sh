@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # npm run demo — everything on loopback with embedded defaults: PostgreSQL, the SMTP stand-in, the app.
 # Safe to run again: it stops the previous servers and seeds only what is missing.
+export MITERWISE_PG_CLUSTER=demo
 source "$(dirname "$0")/lib.sh"
 
 APP_PORT="${PORT:-3000}"
@@ -9,11 +10,10 @@ UPLOAD_STAND_IN_PORT="${UPLOAD_STAND_IN_PORT:-3900}"
 ensure_node_modules
 pg_up
 ensure_database miterwise
-[ -f "$DATA/auth-secret" ] || { head -c 32 /dev/urandom | base64 >"$DATA/auth-secret"; chmod 600 "$DATA/auth-secret"; }
 
 export DATABASE_URL="$(db_url miterwise)"
 export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
-export NEXTAUTH_SECRET="$(cat "$DATA/auth-secret")"
+export NEXTAUTH_SECRET="$(secret_file "$DATA/auth-secret")"
 export SMTP_PORT OUTBOX_DIR="$DATA/outbox" MITERWISE_DATA_DIR="$DATA"
 export UPLOAD_STAND_IN_PORT UPLOAD_STAND_IN_DIR="$DATA/uploads"
 
@@ -32,7 +32,7 @@ if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib db takeoff public 
 fi
 
 start_service smtp npx tsx scripts/smtp-stand-in.ts
-start_service app npx next start -H 127.0.0.1 -p "$APP_PORT"
+start_service app node scripts/serve.mjs -H 127.0.0.1 -p "$APP_PORT"
 wait_for_http "$NEXTAUTH_URL/sign-in" 60 || { tail -n 30 "$DATA/logs/app.log"; die "the app did not start"; }
 
 cat <<MSG

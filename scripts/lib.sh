@@ -38,16 +38,36 @@ ensure_node_modules() {
 # A per-checkout number, so two clones on one machine don't fight over ports.
 checkout_offset() { echo $(( $(printf '%s' "$ROOT" | cksum | cut -d' ' -f1) % 500 )); }
 
-export PGPORT="${PGPORT:-$((54000 + $(checkout_offset)))}"
+# Which PostgreSQL cluster this shell works with: `demo` (the default, durable) or `test` (its own data folder,
+# fsync off for speed — losing it to a power cut costs nothing). Other names are scratch clusters (the backup
+# test restores into one). Each has its own port and folder, derived from the checkout and the name.
+PG_CLUSTER="${MITERWISE_PG_CLUSTER:-demo}"
+pg_port_for() {
+  case "$1" in
+    demo) echo $((54000 + $(checkout_offset))) ;;
+    test) echo $((54500 + $(checkout_offset))) ;;
+    *) echo $((55000 + $(printf '%s' "$ROOT/$1" | cksum | cut -d' ' -f1) % 1000)) ;;
+  esac
+}
+export PGPORT="$(pg_port_for "$PG_CLUSTER")"
 
 # The cluster lives under .data when the postgres user can reach it; a clone inside a private folder
 # (mktemp -d is 0700) falls back to a folder of its own under /var/tmp.
 pg_dir() {
-  local dir="$DATA/pg"
+  local name="pg"
+  [ "$PG_CLUSTER" = demo ] || name="pg-$PG_CLUSTER"
+  local dir="$DATA/$name"
   if [ "$(id -u)" -eq 0 ] && ! runuser -u postgres -- test -x "$DATA" 2>/dev/null; then
-    dir="/var/tmp/miterwise-$(printf '%s' "$ROOT" | sha256sum | cut -c1-12)/pg"
+    dir="/var/tmp/miterwise-$(printf '%s' "$ROOT" | sha256sum | cut -c1-12)/$name"
   fi
   echo "$dir"
+}
+
+# Durable defaults for every cluster but the test one.
+pg_options() {
+  local dir="$1" opts="-c listen_addresses=127.0.0.1 -c port=$PGPORT -c unix_socket_directories=$1/socket"
+  [ "$PG_CLUSTER" = test ] && opts="$opts -c fsync=off -c synchronous_commit=off -c full_page_writes=off"
+  echo "$opts"
 }
 
 # From / so the postgres user is never left in a folder it may not enter.
@@ -73,10 +93,22 @@ pg_up() {
     say "starting PostgreSQL on 127.0.0.1:$PGPORT"
     export PG_STARTED_HERE=1
     as_pg "$bin/pg_ctl" -D "$dir/data" -l "$dir/server.log" -w -t 30 \
-      -o "-c listen_addresses=127.0.0.1 -c port=$PGPORT -c unix_socket_directories=$dir/socket -c fsync=off" \
+      -o "$(pg_options "$dir")" \
       start >/dev/null || { tail -n 20 "$dir/server.log" >&2; die "PostgreSQL did not start"; }
   fi
   export PGHOST=127.0.0.1 PGUSER=miterwise PGPASSWORD="$(cat "$pwfile")"
+  # A demo cluster started by an older checkout ran with fsync off; restart it with the durable defaults.
+  if [ "$PG_CLUSTER" != test ] && [ "$(psql_q -tAc 'show fsync' 2>/dev/null)" = off ]; then
+    say "restarting PostgreSQL with durable settings"
+    as_pg "$bin/pg_ctl" -D "$dir/data" -l "$dir/server.log" -w -t 30 -m fast -o "$(pg_options "$dir")" restart >/dev/null \
+      || { tail -n 20 "$dir/server.log" >&2; die "PostgreSQL did not restart"; }
+  fi
+}
+
+# A random secret kept in a file of the data folder, made on first use (mode 600).
+secret_file() { # path
+  [ -s "$1" ] || { mkdir -p "$(dirname "$1")"; (umask 077; head -c 32 /dev/urandom | base64 >"$1"); }
+  cat "$1"
 }
 
 pg_down() {

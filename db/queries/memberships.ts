@@ -1,7 +1,8 @@
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { memberships, organisations, users, type Role } from "../schema";
-import { conflict, notFound } from "@/lib/errors";
+import { conflict, notFound, unauthenticated } from "@/lib/errors";
+import { bumpSessionVersion } from "./users";
 
 export interface OrgContext {
   orgId: string;
@@ -11,21 +12,31 @@ export interface OrgContext {
   role: Role;
 }
 
-/** The caller's membership in the organisation at this slug, or null — "not a member" and "no such org" look the same. */
-export async function getOrgContext(userId: string, orgSlug: string): Promise<OrgContext | null> {
+/**
+ * The caller's membership in the organisation at this slug, or null — "not a member" and "no such org" look the
+ * same. The session check rides on this read: a cookie issued under an older session version (before sign-out,
+ * a password change or removal) is refused as signed out (401), whatever the slug.
+ */
+export async function getOrgContext(
+  session: { userId: string; sessionVersion: number },
+  orgSlug: string,
+): Promise<OrgContext | null> {
   const [row] = await db
     .select({
+      sessionVersion: users.sessionVersion,
       orgId: organisations.id,
       orgSlug: organisations.slug,
       orgName: organisations.name,
-      userId: memberships.userId,
       role: memberships.role,
     })
-    .from(memberships)
-    .innerJoin(organisations, eq(organisations.id, memberships.orgId))
-    .where(and(eq(memberships.userId, userId), eq(organisations.slug, orgSlug)))
+    .from(users)
+    .leftJoin(organisations, eq(organisations.slug, orgSlug))
+    .leftJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.orgId, organisations.id)))
+    .where(eq(users.id, session.userId))
     .limit(1);
-  return row ?? null;
+  if (!row || row.sessionVersion !== session.sessionVersion) throw unauthenticated();
+  if (!row.orgId || !row.orgSlug || !row.orgName || !row.role) return null;
+  return { orgId: row.orgId, orgSlug: row.orgSlug, orgName: row.orgName, userId: session.userId, role: row.role };
 }
 
 export async function listOrganisationsForUser(userId: string) {
@@ -97,7 +108,12 @@ export async function removeMember({ orgId, membershipId }: { orgId: string; mem
   await db.transaction(async (tx) => {
     const member = await lockMember(tx, orgId, membershipId);
     if (member.role === "admin") await assertAnotherAdmin(tx, orgId, membershipId);
-    await tx.delete(memberships).where(and(eq(memberships.orgId, orgId), eq(memberships.id, membershipId)));
+    const [removed] = await tx
+      .delete(memberships)
+      .where(and(eq(memberships.orgId, orgId), eq(memberships.id, membershipId)))
+      .returning({ userId: memberships.userId });
+    // A removed person's open sessions end too, so nothing they had loaded keeps working anywhere.
+    if (removed) await bumpSessionVersion(removed.userId, tx);
   });
 }
 

@@ -1,4 +1,4 @@
-import { eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { memberships, organisations, users } from "../schema";
 import { slugify, slugSuffix } from "@/lib/slug";
@@ -17,6 +17,24 @@ export async function getUserByEmail(email: string, tx: Tx = db) {
 export async function getUserById(id: string, tx: Tx = db) {
   const [row] = await tx.select(publicUser).from(users).where(eq(users.id, id)).limit(1);
   return row ?? null;
+}
+
+/** The signed-in person, if the session's version is still theirs (sign-out and password changes move it on). */
+export async function getSessionUser(session: { userId: string; sessionVersion: number }, tx: Tx = db) {
+  const [row] = await tx
+    .select(publicUser)
+    .from(users)
+    .where(and(eq(users.id, session.userId), eq(users.sessionVersion, session.sessionVersion)))
+    .limit(1);
+  return row ?? null;
+}
+
+/** Ends every session of this person: cookies issued before carry an older version and stop working. */
+export async function bumpSessionVersion(userId: string, tx: Tx = db) {
+  await tx
+    .update(users)
+    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId));
 }
 
 /** Picks a slug nobody has: the plain one if free, else with a short random suffix. */

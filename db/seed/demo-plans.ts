@@ -28,8 +28,8 @@ const SPEC: Record<WindowMark, TrimSpec> = {
  * stand-in), its sheets, unit types and window list, most sheets calibrated and some tagged — so a
  * newcomer sees the workflow under way. Skips a project that already has plan sets.
  */
-export async function seedDemoPlans(orgId: string, projectName: string, userId: string) {
-  const [project] = await db.select({ id: projects.id }).from(projects).where(and(eq(projects.orgId, orgId), eq(projects.name, projectName)));
+export async function seedDemoPlans(orgId: string, projectId: string | null, userId: string) {
+  const [project] = projectId ? await db.select({ id: projects.id }).from(projects).where(and(eq(projects.orgId, orgId), eq(projects.id, projectId))) : [];
   if (!project) return false;
   const scope = { orgId, projectId: project.id, userId };
   const existing = await db.select({ id: planSets.id }).from(planSets).where(eq(planSets.projectId, project.id)).limit(1);

@@ -4,6 +4,7 @@ import { priceBooks } from "../schema";
 import { createPriceBook } from "../queries/price-books";
 import { createPriceBookItem } from "../queries/price-book-items";
 import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
+import { seedOnce } from "./seed-marks";
 
 /**
  * The demo organisation's price book. Everything here is invented for the demo: the supplier (a
@@ -30,10 +31,26 @@ const ITEMS: Row[] = [
   ["Extension board 1×8", "extension", "7 1/4", "3/4", "Poplar", "DEMO-E108-PO", [null, "29.60", "38.40", "46.90", "56.30", "65.10"]],
 ];
 
-/** Adds the book to the organisation unless one of that name is there already; true when it did. */
-export async function seedDemoPriceBook(orgId: string, userId: string): Promise<boolean> {
-  const [found] = await db.select({ id: priceBooks.id }).from(priceBooks).where(and(eq(priceBooks.orgId, orgId), eq(priceBooks.name, DEMO_PRICE_BOOK_NAME)));
-  if (found) return false;
+/** One demo book per organisation, keyed by the organisation rather than by the book's (renamable) name. */
+const seedKey = (orgId: string) => `price-book:${orgId}`;
+
+/**
+ * Adds the book to the organisation once, found again by its seed key however it has been renamed since;
+ * returns its id and whether it was made now.
+ */
+export async function seedDemoPriceBook(orgId: string, userId: string): Promise<{ id: string; created: boolean }> {
+  return seedOnce(
+    seedKey(orgId),
+    async () => {
+      // Seeded before seed keys existed: the book still carries the seeded name.
+      const [found] = await db.select({ id: priceBooks.id }).from(priceBooks).where(and(eq(priceBooks.orgId, orgId), eq(priceBooks.name, DEMO_PRICE_BOOK_NAME)));
+      return found?.id ?? null;
+    },
+    () => createDemoPriceBook(orgId, userId),
+  );
+}
+
+async function createDemoPriceBook(orgId: string, userId: string): Promise<string> {
   const book = await createPriceBook({
     orgId,
     userId,
@@ -50,5 +67,5 @@ export async function seedDemoPriceBook(orgId: string, userId: string): Promise<
     const input = priceBookItemCreateSchema.parse({ name: `${name} — ${species === FJ ? "FJ pine" : species.toLowerCase()}`, kind, faceWidth, thickness, species, supplierCode, stock });
     await createPriceBookItem({ orgId, userId, priceBookId: book.id }, input);
   }
-  return true;
+  return book.id;
 }

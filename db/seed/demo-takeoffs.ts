@@ -2,15 +2,14 @@ import { and, eq } from "drizzle-orm";
 import { db } from "../client";
 import { priceBookItems, priceBooks, projects, takeoffs } from "../schema";
 import { runTakeoff } from "../queries/takeoffs";
-import { DEMO_PRICE_BOOK_NAME } from "./demo-price-book";
 
 /**
  * Two takeoffs of the demo project so the results and compare pages have something to show: the base
  * bid (each window's own casing, the cheaper stock where two match) and an alternate in poplar casing.
  */
-export async function seedDemoTakeoffs(orgId: string, projectName: string, estimatorId: string) {
-  const [project] = await db.select({ id: projects.id }).from(projects).where(and(eq(projects.orgId, orgId), eq(projects.name, projectName)));
-  const [book] = await db.select({ id: priceBooks.id }).from(priceBooks).where(and(eq(priceBooks.orgId, orgId), eq(priceBooks.name, DEMO_PRICE_BOOK_NAME)));
+export async function seedDemoTakeoffs(orgId: string, projectId: string | null, priceBookId: string, estimatorId: string) {
+  const [project] = projectId ? await db.select({ id: projects.id }).from(projects).where(and(eq(projects.orgId, orgId), eq(projects.id, projectId))) : [];
+  const [book] = await db.select({ id: priceBooks.id }).from(priceBooks).where(and(eq(priceBooks.orgId, orgId), eq(priceBooks.id, priceBookId)));
   if (!project || !book) return false;
   if ((await db.select({ id: takeoffs.id }).from(takeoffs).where(eq(takeoffs.projectId, project.id)).limit(1)).length > 0) return false;
   const scope = { orgId, projectId: project.id, userId: estimatorId };

@@ -15,6 +15,10 @@ export const users = pgTable(
     email: text("email").notNull(),
     passwordHash: text("password_hash").notNull(),
     createdAt: createdAt(),
+    // --- sessions (security) ---
+    // Every session cookie carries the version it was issued under; sign-out, a password change and removal
+    // from an organisation add one, which ends every copy of every older cookie.
+    sessionVersion: integer("session_version").notNull().default(0),
   },
   (t) => [uniqueIndex("users_email_key").on(t.email), check("users_email_lower", sql`${t.email} = lower(${t.email})`)],
 );

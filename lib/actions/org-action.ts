@@ -1,6 +1,6 @@
 import type { z } from "zod";
 import { getOrgContext, type OrgContext } from "@/db/queries/memberships";
-import { currentUserId } from "@/lib/auth/session";
+import { currentSession } from "@/lib/auth/session";
 import { fieldErrors, forbidden, notFound, toAppError, unauthenticated } from "@/lib/errors";
 import { can, type Permission } from "@/lib/permissions";
 
@@ -19,9 +19,9 @@ export function orgAction<S extends z.ZodType, T>(
 ) {
   return async (_previous: ActionResult<T> | null, formData: FormData): Promise<ActionResult<T>> => {
     try {
-      const userId = await currentUserId();
-      if (!userId) throw unauthenticated();
-      const org = await getOrgContext(userId, String(formData.get("orgSlug") ?? ""));
+      const session = await currentSession();
+      if (!session) throw unauthenticated();
+      const org = await getOrgContext(session, String(formData.get("orgSlug") ?? ""));
       if (!org) throw notFound("No such organisation.");
       if (!can(org.role, options.permission)) throw forbidden();
       const raw = Object.fromEntries([...formData.entries()].filter(([k]) => k !== "orgSlug" && !k.startsWith("$")));

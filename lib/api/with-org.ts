@@ -1,6 +1,6 @@
 import type { NextRequest } from "next/server";
 import { getOrgContext, type OrgContext } from "@/db/queries/memberships";
-import { userIdFromRequest } from "@/lib/auth/session";
+import { sessionFromRequest } from "@/lib/auth/session";
 import { forbidden, notFound, unauthenticated } from "@/lib/errors";
 import { errorResponse } from "./error-response";
 import { can, type Permission } from "@/lib/permissions";
@@ -18,10 +18,10 @@ export function withOrg<P extends Params & { orgSlug: string }>(
 ) {
   return async (req: NextRequest, context: RouteContext<P>): Promise<Response> => {
     try {
-      const userId = await userIdFromRequest(req);
-      if (!userId) throw unauthenticated();
+      const session = await sessionFromRequest(req);
+      if (!session) throw unauthenticated();
       const params = await context.params;
-      const org = await getOrgContext(userId, params.orgSlug);
+      const org = await getOrgContext(session, params.orgSlug);
       if (!org) throw notFound("No such organisation.");
       if (!can(org.role, options.permission)) throw forbidden();
       return await handler({ req, params, org });

@@ -2,17 +2,17 @@ import { cache } from "react";
 import { headers } from "next/headers";
 import { notFound, redirect } from "next/navigation";
 import { getOrgContext } from "@/db/queries/memberships";
-import { getUserById } from "@/db/queries/users";
+import { getSessionUser } from "@/db/queries/users";
 import { can, type Permission } from "@/lib/permissions";
 import { REQUEST_PATH_HEADER, safeReturnPath } from "./return-to";
-import { currentUserId } from "./session";
+import { currentSession } from "./session";
 
 /** Signed-in user for a server page, or a redirect to sign-in that comes back here. */
 export const requireUser = cache(async (returnTo: string) => {
-  const userId = await currentUserId();
-  const user = userId ? await getUserById(userId) : null;
-  if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(returnTo)}`);
-  return user;
+  const session = await currentSession();
+  const user = session ? await getSessionUser(session) : null;
+  if (!session || !user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(returnTo)}`);
+  return { ...user, session };
 });
 
 /** The page this request asked for (set by proxy.ts), so sign-in can bring a deep link back to it. */
@@ -23,7 +23,7 @@ async function requestedPath(fallback: string) {
 /** The caller's membership for an org page; a slug they don't belong to is a 404, like one that doesn't exist. */
 export const requireOrg = cache(async (orgSlug: string) => {
   const user = await requireUser(await requestedPath(`/${orgSlug}`));
-  const org = await getOrgContext(user.id, orgSlug);
+  const org = await getOrgContext(user.session, orgSlug);
   if (!org) notFound();
   return {
     user,

@@ -1,20 +1,30 @@
-import { getToken } from "next-auth/jwt";
+import { getToken, type JWT } from "next-auth/jwt";
 import type { NextRequest } from "next/server";
 import { cookies, headers } from "next/headers";
 import { env } from "@/lib/env";
 
 const secureCookie = env.NEXTAUTH_URL.startsWith("https://");
 
-/** The signed-in user's id from the session cookie of a route handler's request, or null. */
-export async function userIdFromRequest(req: NextRequest | Request): Promise<string | null> {
-  const token = await getToken({ req: req as NextRequest, secret: env.NEXTAUTH_SECRET, secureCookie });
-  return token?.sub ?? null;
+/**
+ * Who a session cookie says the caller is, and which of their session versions it was issued under. The
+ * version is compared with the user's row on the same read that loads the membership (`getOrgContext`,
+ * `getSessionUser`), so signing out, changing the password or being removed ends every copy of the cookie.
+ */
+export type SessionRef = { userId: string; sessionVersion: number };
+
+function sessionOf(token: JWT | null): SessionRef | null {
+  if (!token?.sub || typeof token.sv !== "number") return null;
+  return { userId: token.sub, sessionVersion: token.sv };
+}
+
+/** The session of a route handler's request, or null. */
+export async function sessionFromRequest(req: NextRequest | Request): Promise<SessionRef | null> {
+  return sessionOf(await getToken({ req: req as NextRequest, secret: env.NEXTAUTH_SECRET, secureCookie }));
 }
 
 /** The same for server components and server actions, which read the request through next/headers. */
-export async function currentUserId(): Promise<string | null> {
+export async function currentSession(): Promise<SessionRef | null> {
   const [h, c] = await Promise.all([headers(), cookies()]);
   const req = { headers: h, cookies: c } as unknown as NextRequest;
-  const token = await getToken({ req, secret: env.NEXTAUTH_SECRET, secureCookie });
-  return token?.sub ?? null;
+  return sessionOf(await getToken({ req, secret: env.NEXTAUTH_SECRET, secureCookie }));
 }

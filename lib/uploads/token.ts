@@ -1,3 +1,7 @@
+import { randomBytes } from "node:crypto";
+import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import path from "node:path";
+
 /**
  * `UPLOADTHING_TOKEN` is standard base64 of `{"apiKey":"sk_…","appId":"…","regions":[…]}`. The SDK in the
  * app signs with the api key and the upload stand-in verifies with the same key, so both sides read one token.
@@ -10,15 +14,8 @@ export type UploadToken = {
   ingestHost?: string;
 };
 
-/**
- * A fixed token for the demo and the tests. It protects nothing — the stand-in listens on loopback only —
- * but it has the shape the SDK insists on (`sk_` prefix, at least one region).
- */
-export const LOCAL_UPLOAD_TOKEN: Readonly<UploadToken> = Object.freeze({
-  apiKey: "sk_local_miterwise_stand_in_not_a_secret",
-  appId: "miterwiselocal",
-  regions: ["local1"],
-});
+/** The local stand-in's app id and region; its api key is made per checkout (see `localUploadToken`). */
+export const LOCAL_UPLOAD_APP = Object.freeze({ appId: "miterwiselocal", regions: ["local1"] as readonly string[] });
 
 export function encodeUploadToken(token: UploadToken): string {
   assertValid(token);
@@ -27,9 +24,30 @@ export function encodeUploadToken(token: UploadToken): string {
   return Buffer.from(JSON.stringify(body), "utf8").toString("base64");
 }
 
-/** The local default, encoded — what `UPLOADTHING_TOKEN` is set to when nothing else is configured. */
-export function localUploadToken(): string {
-  return encodeUploadToken({ ...LOCAL_UPLOAD_TOKEN, regions: [...LOCAL_UPLOAD_TOKEN.regions] });
+/**
+ * The local default, encoded — what `UPLOADTHING_TOKEN` is set to when nothing else is configured. The api key
+ * signs the service's callbacks to the app, so a key anyone could read would let anyone forge an upload: it is
+ * random, made once per checkout and kept in the data folder (like the auth secret), where the app and the
+ * stand-in both read it.
+ */
+export function localUploadToken(dataDir = process.env.MITERWISE_DATA_DIR ?? ".data"): string {
+  return encodeUploadToken({ apiKey: localApiKey(dataDir), appId: LOCAL_UPLOAD_APP.appId, regions: [...LOCAL_UPLOAD_APP.regions] });
+}
+
+function localApiKey(dataDir: string): string {
+  const file = path.join(dataDir, "upload-stand-in-key");
+  const read = () => readFileSync(file, "utf8").trim();
+  try {
+    return read();
+  } catch {
+    mkdirSync(dataDir, { recursive: true });
+    try {
+      writeFileSync(file, `sk_local_${randomBytes(32).toString("hex")}\n`, { mode: 0o600, flag: "wx" });
+    } catch (error) {
+      if ((error as NodeJS.ErrnoException).code !== "EEXIST") throw error; // another process made it first
+    }
+    return read();
+  }
 }
 
 /** Decodes and checks a token the way the SDK does, so a token the stand-in accepts is one the app accepts. */

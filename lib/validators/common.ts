@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { passwordProblem } from "@/lib/auth/password-policy";
 
 /** Free text a person types: trimmed, no control characters, bounded. Stored and shown as text. */
 export const text = (label: string, max: number) =>
@@ -21,10 +22,13 @@ export const email = z
   .max(254, "E-mail must be at most 254 characters.")
   .pipe(z.email("Enter a valid e-mail address."));
 
+/** A password someone chooses (see lib/auth/password-policy.ts); the e-mail check is on the form's schema. */
 export const password = z
   .string({ error: "Password is required." })
   .min(1, "Password is required.")
-  .min(8, "Password must be at least 8 characters.")
-  .max(200, "Password must be at most 200 characters.");
+  .superRefine((value, ctx) => {
+    const problem = passwordProblem(value);
+    if (problem) ctx.addIssue({ code: "custom", message: problem });
+  });
 
 export const uuid = z.uuid("Not a valid id.");

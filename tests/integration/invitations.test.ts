@@ -5,7 +5,8 @@ import * as accept from "@/app/api/invitations/accept/route";
 import { db } from "@/db/client";
 import { invitations, memberships, organisations, users } from "@/db/schema";
 import { readOutbox } from "@/lib/mail/outbox";
-import { outboxDir } from "@/lib/env";
+import { NextRequest } from "next/server";
+import { env, outboxDir } from "@/lib/env";
 import { authorizeCredentials } from "@/lib/auth/options";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
@@ -142,5 +143,58 @@ describe("invitations", () => {
     const rows = await db.select({ tokenHash: invitations.tokenHash }).from(invitations).where(eq(invitations.orgId, w.org.id));
     expect(rows.map((r) => r.tokenHash)).not.toContain(token);
     expect(rows.every((r) => /^[0-9a-f]{64}$/.test(r.tokenHash))).toBe(true);
+  });
+});
+
+describe("accepting an invitation is throttled like signing in", () => {
+  /** As our server forwards it: the socket's address under the process's peer token. */
+  const acceptFrom = async (address: string, body: Record<string, unknown>) => {
+    process.env.MITERWISE_PEER_TOKEN ??= `peer-${unique()}`;
+    const req = new NextRequest(new URL("/api/invitations/accept", env.NEXTAUTH_URL), {
+      method: "POST",
+      headers: { "content-type": "application/json", "x-miterwise-peer": `${process.env.MITERWISE_PEER_TOKEN} ${address}` },
+      body: JSON.stringify(body),
+    });
+    const res = await accept.POST(req, { params: Promise.resolve({}) });
+    return { status: res.status, json: (await res.json()) as { error?: string; fields?: Record<string, string> } };
+  };
+
+  it("30 wrong passwords for an existing account through its invitation are stopped after 5, the right one too", async () => {
+    const first = await makeOrg("Alder");
+    const person = first.people.admin;
+    const { token } = await inviteByMail(person.email, "estimator");
+    const address = `198.51.100.${Math.floor(Math.random() * 200) + 1}`;
+    const statuses: number[] = [];
+    for (let i = 0; i < 30; i++) statuses.push((await acceptFrom(address, { token, password: `guess number ${i}` })).status);
+    expect(statuses.filter((s) => s === 422)).toHaveLength(5);
+    expect(statuses.filter((s) => s === 429)).toHaveLength(25);
+    const right = await acceptFrom(address, { token, password: PASSWORD });
+    expect(right.status).toBe(429);
+    expect(right.json.error).toMatch(/Too many failed attempts/);
+    // The same account's sign-in from that address is blocked too: one limiter for both.
+    await expect(authorizeCredentials({ email: person.email, password: PASSWORD }, address)).rejects.toThrow(/Too many/);
+  });
+
+  it("guessing invitation links is throttled per address", async () => {
+    const address = `203.0.113.${Math.floor(Math.random() * 200) + 1}`;
+    let blocked = 0;
+    for (let i = 0; i < 110; i++) {
+      const res = await acceptFrom(address, { token: `made-up-${i}-${unique()}`, name: "Guesser", password: "a fresh password" });
+      if (res.status === 429) blocked++;
+      else expect(res.status).toBe(404);
+    }
+    expect(blocked).toBe(10);
+  });
+
+  it("a new account may not use a common password or its own e-mail", async () => {
+    const email = `chooser-${unique()}@example.test`;
+    const { token } = await inviteByMail(email);
+    const before = await snapshot();
+    for (const password of ["password", "12345678", "        ", email]) {
+      const res = await acceptWith({ token, name: "Chooser", password });
+      expect(res.status, password).toBe(422);
+      expect(res.json.fields?.password).toBeTruthy();
+    }
+    expect(await snapshot()).toBe(before);
   });
 });

@@ -69,10 +69,10 @@ describe("members", () => {
     expect((await create()).status).toBe(403);
   });
 
-  it("a removed member loses the organisation at once: 404, as if it never existed", async () => {
+  it("a removed member loses the organisation at once: their session ends, and signed in again it is a 404", async () => {
     const w = await makeOrg("Bracken");
     const cookie = await sessionCookie(w.spare);
-    const list = () => call(projectsRoute.GET, { method: "GET", path: "/api/x", params: { orgSlug: w.org.slug }, cookie });
+    const list = (c = cookie) => call(projectsRoute.GET, { method: "GET", path: "/api/x", params: { orgSlug: w.org.slug }, cookie: c });
     expect((await list()).status).toBe(200);
     const del = await call(memberRoute.DELETE, {
       method: "DELETE",
@@ -81,7 +81,8 @@ describe("members", () => {
       cookie: await sessionCookie(w.people.admin),
     });
     expect(del.status).toBe(204);
-    expect((await list()).status).toBe(404);
+    expect((await list()).status).toBe(401);
+    expect((await list(await sessionCookie(w.spare))).status).toBe(404);
   });
 
   it("an unknown role is refused with a field message", async () => {

@@ -3,22 +3,24 @@
  * stand-in → the stand-in's callback → the app reads the bytes back with pdf.js and saves sheets. A file
  * that is not a usable PDF leaves no plan set, no sheet and no stored file.
  */
-import { createHash } from "node:crypto";
+import { createHash, createHmac } from "node:crypto";
 import { readdir, readFile, mkdtemp, rm } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { eq } from "drizzle-orm";
 import { NextRequest } from "next/server";
 import { genUploader } from "uploadthing/client";
+import { UTApi, UTFile } from "uploadthing/server";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { PlanRouter } from "@/app/api/uploadthing/core";
 import * as fileRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/plan-sets/[planSetId]/file/route";
 import { db } from "@/db/client";
-import { planSets, sheets } from "@/db/schema";
+import { pendingUploads, planSets, sheets } from "@/db/schema";
+import { ingestPlanUpload } from "@/lib/plans/ingest-upload";
 import { generatePlanSet } from "@/lib/plans/demo-plan";
 import type { PlanUploadResult } from "@/lib/plans/api-types";
 import { startUploadStandIn, type UploadStandIn } from "@/lib/uploads/stand-in";
-import { localUploadToken } from "@/lib/uploads/token";
+import { localUploadToken, parseUploadToken } from "@/lib/uploads/token";
 import { FetchXhr, serveUploadApp } from "./helpers/upload-app";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
@@ -170,5 +172,82 @@ describe("who may upload", () => {
       headers: { cookie },
     });
     await expect(attempt).rejects.toThrow(/No such project/);
+  });
+});
+
+describe("forged upload callbacks", () => {
+  const { apiKey } = parseUploadToken(localUploadToken());
+  /** A callback body as the upload service writes it, naming `world`'s project in its metadata. */
+  const forgedBody = (key: string, world: World, size: number) =>
+    JSON.stringify({
+      status: "uploaded",
+      metadata: { orgId: world.org.id, projectId: world.project.id, userId: home.people.estimator.id },
+      file: { name: "forged.pdf", size, type: "application/pdf", customId: null, key, url: `${standIn.url}/f/${key}`, appUrl: `${standIn.url}/f/${key}`, ufsUrl: `${standIn.url}/f/${key}`, fileHash: "x" },
+      origin: standIn.url,
+    });
+  const postCallback = (body: string, key: string) =>
+    fetch(`${app.url}?slug=planSet`, {
+      method: "POST",
+      headers: { "content-type": "application/json", "uploadthing-hook": "callback", "x-uploadthing-signature": `hmac-sha256=${createHmac("sha256", key).update(body).digest("hex")}` },
+      body,
+    });
+  const readPlanFile = async (world: World, planSetId: string) =>
+    fileRoute.GET(new NextRequest("http://127.0.0.1/x", { headers: { cookie: await sessionCookie(world.people.admin) } }), {
+      params: Promise.resolve({ orgSlug: world.org.slug, projectId: world.project.id, planSetId }),
+    });
+  /** Stores a real PDF at the stand-in the way anyone holding the key could, without any presign by the app. */
+  const storeBehindTheAppsBack = async () => {
+    const { bytes } = await generatePlanSet({ unitTypes: ["C"], commonArea: false });
+    const api = new UTApi({ token: localUploadToken(), apiUrl: standIn.url, ingestUrl: standIn.url, logLevel: "Error" });
+    const { data } = await api.uploadFiles(new UTFile([Buffer.from(bytes)], "planted.pdf"));
+    return { key: data!.key, size: bytes.byteLength };
+  };
+
+  it("a callback signed with the old published stand-in key is refused; nothing is stored", async () => {
+    const planted = await storeBehindTheAppsBack();
+    const before = await snapshot();
+    const res = await postCallback(forgedBody(planted.key, other, planted.size), "sk_local_miterwise_stand_in_not_a_secret");
+    expect(res.status).toBe(403);
+    expect(await snapshot()).toBe(before);
+    expect(await db.select().from(planSets).where(eq(planSets.fileKey, planted.key))).toHaveLength(0);
+  });
+
+  it("a correctly signed callback for a key the app never presigned is refused; nothing is stored", async () => {
+    const planted = await storeBehindTheAppsBack();
+    const before = await snapshot();
+    const res = await postCallback(forgedBody(planted.key, other, planted.size), apiKey);
+    expect(res.status).toBe(403);
+    expect(await snapshot()).toBe(before);
+  });
+
+  it("a correctly signed callback naming another organisation's stored file leaves that file served", async () => {
+    const { bytes } = await generatePlanSet({ unitTypes: ["A"], commonArea: false });
+    const theirs = await upload(other.people.admin, pdfFile(bytes, "theirs.pdf"), other);
+    expect(theirs).toMatchObject({ ok: true });
+    if (!theirs.ok) return;
+    const [set] = await db.select().from(planSets).where(eq(planSets.id, theirs.planSetId));
+    const before = await snapshot();
+    // A replay of the completed upload, and one naming the attacker's own organisation instead.
+    for (const world of [other, home]) {
+      expect((await postCallback(forgedBody(set!.fileKey, world, bytes.byteLength), apiKey)).status).toBe(403);
+    }
+    // Even past the route's check, ingesting refuses and deletes nothing another row owns.
+    expect(await ingestPlanUpload({ key: set!.fileKey, name: "x.pdf", size: bytes.byteLength })).toMatchObject({ ok: false });
+    expect(await snapshot()).toBe(before);
+    const served = await readPlanFile(other, theirs.planSetId);
+    expect(served.status).toBe(200);
+    expect(Buffer.compare(Buffer.from(await served.arrayBuffer()), Buffer.from(bytes))).toBe(0);
+  });
+
+  it("where an upload lands is what was presigned, never what the callback's metadata says", async () => {
+    const { bytes } = await generatePlanSet({ unitTypes: ["B"], commonArea: false });
+    const result = await upload(home.people.estimator, pdfFile(bytes, "mine.pdf"));
+    expect(result).toMatchObject({ ok: true });
+    if (!result.ok) return;
+    const [set] = await db.select().from(planSets).where(eq(planSets.id, result.planSetId));
+    expect(set).toMatchObject({ orgId: home.org.id, projectId: home.project.id, uploadedBy: home.people.estimator.id });
+    const [pending] = await db.select().from(pendingUploads).where(eq(pendingUploads.fileKey, set!.fileKey));
+    expect(pending).toMatchObject({ orgId: home.org.id, projectId: home.project.id, userId: home.people.estimator.id });
+    expect(pending!.claimedAt).not.toBeNull();
   });
 });

@@ -140,11 +140,23 @@ describe("the change log", () => {
 });
 
 describe("the demo price book", () => {
+  it("is found again by its seed key after being renamed, so seeding again adds no second book", async () => {
+    const { seedDemoPriceBook } = await import("@/db/seed/demo-price-book");
+    const { pool } = await import("@/db/client");
+    const w = await makeOrg("Sorrel");
+    const books = async () => (await pool.query("select count(*)::int as n from price_books where org_id = $1", [w.org.id])).rows[0].n as number;
+    const first = await seedDemoPriceBook(w.org.id, w.people.admin.id);
+    const count = await books();
+    await pool.query("update price_books set name = 'Our own 2027 prices' where id = $1", [first.id]);
+    expect(await seedDemoPriceBook(w.org.id, w.people.admin.id)).toEqual({ id: first.id, created: false });
+    expect(await books()).toBe(count);
+  });
+
   it("is seeded once, every item valid, and survives its own export and import unchanged", async () => {
     const { seedDemoPriceBook, DEMO_PRICE_BOOK_NAME } = await import("@/db/seed/demo-price-book");
     const w = await makeOrg("Sorrel");
-    expect(await seedDemoPriceBook(w.org.id, w.people.admin.id)).toBe(true);
-    expect(await seedDemoPriceBook(w.org.id, w.people.admin.id)).toBe(false);
+    expect(await seedDemoPriceBook(w.org.id, w.people.admin.id)).toMatchObject({ created: true });
+    expect(await seedDemoPriceBook(w.org.id, w.people.admin.id)).toMatchObject({ created: false });
     const cookie = await sessionCookie(w.people.admin);
     const list = await call(booksRoute.GET, { method: "GET", path: "/x", params: { orgSlug: w.org.slug }, cookie });
     const demo = (list.json.priceBooks as { id: string; name: string; itemCount: number; markup: number; taxRate: number }[]).find((b) => b.name === DEMO_PRICE_BOOK_NAME)!;

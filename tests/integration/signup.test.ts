@@ -15,6 +15,19 @@ const good = () => ({
 });
 
 describe("POST /api/signup", () => {
+  it("refuses the most common passwords, one character repeated and the e-mail itself (NIST SP 800-63B 5.1.1.2)", async () => {
+    const input = good();
+    const before = await snapshot();
+    for (const password of ["password", "12345678", "        ", "qwertyuiop", "Password1", input.email, input.email.toUpperCase(), "short"]) {
+      const res = await call(signup.POST, { method: "POST", path: "/api/signup", body: { ...input, password } });
+      expect(res.status, password).toBe(422);
+      expect(res.json.fields?.password, password).toBeTruthy();
+    }
+    expect(await snapshot()).toBe(before);
+    // No composition rules: a long phrase of plain words is fine.
+    expect((await call(signup.POST, { method: "POST", path: "/api/signup", body: { ...input, password: "walnut stool and apron" } })).status).toBe(201);
+  });
+
   it("creates the person, their organisation, and makes them its admin; no hash in the answer", async () => {
     const input = good();
     const res = await call(signup.POST, { method: "POST", path: "/api/signup", body: input });

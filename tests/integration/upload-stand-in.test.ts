@@ -6,13 +6,16 @@ import path from "node:path";
 import { createRouteHandler, UTApi, UTFile } from "uploadthing/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { startUploadStandIn, type UploadStandIn } from "@/lib/uploads/stand-in";
-import { encodeUploadToken, LOCAL_UPLOAD_TOKEN, localUploadToken } from "@/lib/uploads/token";
+import { signUrl } from "@/lib/uploads/stand-in/signature";
+import { encodeUploadToken, localUploadToken, parseUploadToken } from "@/lib/uploads/token";
 import { FetchXhr, recordingFetch, serveUploadApp } from "./helpers/upload-app";
 import { sdkConfig, seen, sheet, testRouter as router, uploader, utapiFor } from "./helpers/upload-sdk";
 import { bytesOf, md5, pdf, pdfBytes, presign, putPart, putThenDrop, rawGet, signUpload } from "./helpers/upload-wire";
 
 const token = localUploadToken();
-const { apiKey, appId } = LOCAL_UPLOAD_TOKEN;
+const { apiKey, appId } = parseUploadToken(localUploadToken());
+/** Files are served through signed, expiring links only; this signs one the way `generateSignedURL` does. */
+const signedLink = (url: string) => signUrl(url, apiKey, 60);
 
 let root: string;
 let dataDir: string;
@@ -59,7 +62,7 @@ describe("upload stand-in", () => {
     expect(await refused.json()).toEqual({ error: "The URL has expired" });
     expect(existsSync(path.join(dataDir, "files", good!.key))).toBe(false);
 
-    const wrongToken = encodeUploadToken({ ...LOCAL_UPLOAD_TOKEN, apiKey: "sk_not_the_key", regions: ["local1"] });
+    const wrongToken = encodeUploadToken({ appId, apiKey: "sk_not_the_key", regions: ["local1"] });
     await expect(new UTApi({ token: wrongToken, apiUrl: standIn.url, logLevel: "None" }).listFiles()).rejects.toThrow();
     for (const endpoint of ["/v6/deleteFiles", "/v6/listFiles", "/route-metadata", "/callback-result"]) {
       const headers = { "x-uploadthing-api-key": "sk_not_the_key" };
@@ -93,9 +96,9 @@ describe("upload stand-in", () => {
     expect(body.serverData).toEqual({ sheetKey: target!.key, projectId: "p2" });
     expect(body.fileHash).toBe(md5(bytes));
     expect(await resumePoint()).toBe(bytes.length);
-    expect(md5(await bytesOf(await fetch(body.ufsUrl)))).toBe(md5(bytes));
+    expect(md5(await bytesOf(await fetch(signedLink(body.ufsUrl))))).toBe(md5(bytes));
 
-    const part = await fetch(body.ufsUrl, { headers: { range: "bytes=1000-1009" } });
+    const part = await fetch(signedLink(body.ufsUrl), { headers: { range: "bytes=1000-1009" } });
     expect(part.status).toBe(206);
     expect(part.headers.get("content-range")).toBe(`bytes 1000-1009/${bytes.length}`);
     expect(await bytesOf(part)).toEqual(bytes.subarray(1000, 1010));
@@ -116,7 +119,7 @@ describe("upload stand-in", () => {
     const signature = expect.stringMatching(/^hmac-sha256=[0-9a-f]{64}$/);
     expect(app.hooks.slice(hooksBefore)).toEqual([{ hook: "callback", slug: "planPdf", signature }]);
 
-    const served = await fetch(uploaded!.ufsUrl);
+    const served = await fetch(signedLink(uploaded!.ufsUrl));
     expect(served.status).toBe(200);
     expect(served.headers.get("content-type")).toBe("application/pdf");
     expect(served.headers.get("content-disposition")).toContain("inline;");
@@ -133,7 +136,7 @@ describe("upload stand-in", () => {
 
     // A second stand-in on the same folder serves the file: nothing lives only in memory.
     const restarted = await startUploadStandIn({ port: 0, dataDir, token });
-    const again = await bytesOf(await fetch(`${restarted.url}/a/${appId}/${uploaded!.key}`));
+    const again = await bytesOf(await fetch(signedLink(`${restarted.url}/a/${appId}/${uploaded!.key}`)));
     await restarted.close();
     expect(md5(again)).toBe(md5(expected));
 
@@ -188,7 +191,7 @@ describe("upload stand-in", () => {
     expect(uploaded!.serverData).toBeNull();
     // The app did get the callback; its onUploadComplete threw, so no result was ever posted.
     await vi.waitFor(() => expect(seen.brokenCalls).toBe(before + 1));
-    expect((await fetch(uploaded!.ufsUrl)).status).toBe(200);
+    expect((await fetch(signedLink(uploaded!.ufsUrl))).status).toBe(200);
   });
 
   it("serves UTApi: server-side upload, URLs, rename, private files behind signed links, usage, delete", async () => {
@@ -197,10 +200,10 @@ describe("upload stand-in", () => {
     const { data, error } = await api.uploadFiles(new UTFile([bytes], "server side.pdf", { customId: "server-1" }));
     expect(error).toBeNull();
     expect(data!.fileHash).toBe(md5(bytes));
-    expect((await fetch((await api.getFileUrls(data!.key)).data[0]!.url)).status).toBe(200);
+    expect((await fetch(signedLink((await api.getFileUrls(data!.key)).data[0]!.url))).status).toBe(200);
 
     expect(await api.renameFiles({ fileKey: data!.key, newName: "Sheet A-2.pdf" })).toMatchObject({ success: true });
-    expect((await fetch(data!.ufsUrl)).headers.get("content-disposition")).toContain('filename="Sheet A-2.pdf"');
+    expect((await fetch(signedLink(data!.ufsUrl))).headers.get("content-disposition")).toContain('filename="Sheet A-2.pdf"');
     await api.updateACL(data!.key, "private");
     expect((await fetch(data!.ufsUrl)).status).toBe(403);
     const signed = await api.getSignedURL(data!.key, { expiresIn: 60 });
@@ -211,6 +214,16 @@ describe("upload stand-in", () => {
     expect(usage.totalBytes).toBeGreaterThanOrEqual(bytes.length);
     expect(await api.deleteFiles("server-1", { keyType: "customId" })).toMatchObject({ deletedCount: 1 });
     expect((await fetch(data!.ufsUrl)).status).toBe(404);
+  });
+
+  it("serves stored bytes only through a signed link that has not expired", async () => {
+    const { data } = await utapi().uploadFiles(new UTFile([pdfBytes(2_000, 9)], "confidential.pdf"));
+    expect((await fetch(signedLink(data!.ufsUrl))).status).toBe(200);
+    for (const bare of [data!.ufsUrl, data!.url, `${standIn.url}/a/${appId}/${data!.key}`]) {
+      expect((await fetch(bare)).status, bare).toBe(403);
+    }
+    expect((await fetch(signUrl(data!.ufsUrl, apiKey, -1))).status).toBe(403); // expired
+    expect((await fetch(signUrl(data!.ufsUrl, "sk_someone_else", 60))).status).toBe(403);
   });
 
   it("stays inside its data folder and within its size limits", async () => {

@@ -1,9 +1,10 @@
-import { createUploadthing, type FileRouter } from "uploadthing/next";
+import { createUploadthing, UTFiles, type FileRouter } from "uploadthing/next";
 import { UploadThingError } from "uploadthing/server";
 import { z } from "zod";
 import { getOrgContext } from "@/db/queries/memberships";
+import { recordPendingUploads } from "@/db/queries/pending-uploads";
 import { assertProject } from "@/db/queries/project-scope";
-import { userIdFromRequest } from "@/lib/auth/session";
+import { sessionFromRequest } from "@/lib/auth/session";
 import { toAppError } from "@/lib/errors";
 import { can } from "@/lib/permissions";
 import { DEFAULT_PDF_LIMITS } from "@/lib/pdf/inspect";
@@ -21,9 +22,11 @@ export const planRouter = {
   planSet: f({ pdf: { maxFileSize: "256MB", maxFileCount: 20 } })
     .input(z.object({ orgSlug: z.string().max(80), projectId: z.uuid() }))
     .middleware(async ({ req, input, files }) => {
-      const userId = await userIdFromRequest(req);
-      if (!userId) throw refuse("FORBIDDEN", "Sign in to upload plans.");
-      const org = await getOrgContext(userId, input.orgSlug);
+      const session = await sessionFromRequest(req);
+      if (!session) throw refuse("FORBIDDEN", "Sign in to upload plans.");
+      const org = await getOrgContext(session, input.orgSlug).catch(() => {
+        throw refuse("FORBIDDEN", "Sign in to upload plans."); // a session that was signed out
+      });
       if (!org) throw refuse("NOT_FOUND", "No such project.");
       if (!can(org.role, "plans.write")) throw refuse("FORBIDDEN", "Your role cannot upload plans.");
       try {
@@ -33,11 +36,12 @@ export const planRouter = {
       }
       const tooBig = files.find((file) => file.size > DEFAULT_PDF_LIMITS.maxBytes);
       if (tooBig) throw refuse("FORBIDDEN", `${tooBig.name} is larger than the 200 MB limit. Split the set and upload each part.`);
-      return { orgId: org.orgId, projectId: input.projectId, userId };
+      // Who uploads what, where, is kept on our side; the route handler ties each generated key to its row.
+      const ids = await recordPendingUploads({ orgId: org.orgId, projectId: input.projectId, userId: session.userId }, [...files]);
+      return { [UTFiles]: files.map((file, i) => ({ ...file, customId: ids[i] })) };
     })
-    .onUploadComplete(async ({ metadata, file }) =>
-      ingestPlanUpload(metadata, { key: file.key, name: file.name, size: file.size }),
-    ),
+    // The callback's metadata is not trusted: the pending upload recorded above says where the file belongs.
+    .onUploadComplete(async ({ file }) => ingestPlanUpload({ key: file.key, name: file.name, size: file.size })),
 } satisfies FileRouter;
 
 export type PlanRouter = typeof planRouter;

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { outboxDir, usesMailStandIn } from "@/lib/env";
+import { outboxAvailable, outboxDir } from "@/lib/env";
 import { readOutbox } from "@/lib/mail/outbox";
 import { Logo } from "@/components/logo";
 
@@ -8,11 +8,12 @@ export const metadata: Metadata = { title: "Demo outbox" };
 export const dynamic = "force-dynamic";
 
 /**
- * Exists only while mail goes to the local SMTP stand-in (demo and tests): it shows what would have
- * been e-mailed, so someone trying the demo can follow an invitation link. With a real provider it is a 404.
+ * Shows what would have been e-mailed, so someone trying the demo can follow an invitation link. It lists
+ * every organisation's links, so it exists only while mail goes to the local SMTP stand-in and the app listens
+ * on loopback only; anywhere else it is a 404.
  */
 export default async function OutboxPage() {
-  if (!usesMailStandIn()) notFound();
+  if (!outboxAvailable()) notFound();
   const messages = await readOutbox(outboxDir());
   return (
     <main className="mx-auto max-w-3xl px-6 py-10">

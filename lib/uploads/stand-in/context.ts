@@ -24,6 +24,8 @@ export type UploadStandInOptions = {
   publicUrl?: string;
   /** Where to report problems nobody else hears about (failed callbacks); default silent. */
   log?: (line: string) => void;
+  /** Also log every request with its status and duration (UPLOAD_STAND_IN_TRACE=1 for the script). */
+  trace?: boolean;
 };
 
 export type Limits = {

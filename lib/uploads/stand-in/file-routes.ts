@@ -7,21 +7,19 @@ import { verifySignedUrl } from "./signature";
 import { isValidKey, type StoredFile } from "./storage";
 
 /**
- * `GET|HEAD /f/{key}` and `/a/{appId}/{key}`: the stored bytes with their type and disposition. Private files
- * need a signed link (`UTApi.generateSignedURL` / `getSignedURL`); a link that is signed must verify, whatever
- * the file's ACL. Single byte ranges are honoured because PDF viewers fetch large files piecewise.
+ * `GET|HEAD /f/{key}` and `/a/{appId}/{key}`: the stored bytes with their type and disposition, only through a
+ * signed, unexpired link (`UTApi.generateSignedURL` / `getSignedURL`), as the hosted service serves an app whose
+ * files are private: plan sets are confidential, and a bare key must not be enough to read one. Single byte
+ * ranges are honoured because PDF viewers fetch large files piecewise.
  */
 export async function serveFile(ctx: StandIn, req: IncomingMessage, res: ServerResponse, key: string) {
   const file = isValidKey(key) ? await ctx.store.get(key) : null;
   if (!file) return sendJson(res, 404, { error: "File not found" });
 
-  const signed = new URL(req.url ?? "/", "http://stand-in").searchParams.has("signature");
-  if (signed || file.acl === "private") {
-    const origin = requestOrigin(req, ctx.selfUrl);
-    const candidates = [...new Set([origin, ctx.selfUrl])].map((base) => base + (req.url ?? ""));
-    const check = verifySignedUrl(candidates, ctx.apiKey);
-    if (!check.ok) return sendJson(res, 403, { error: check.reason });
-  }
+  const origin = requestOrigin(req, ctx.selfUrl);
+  const candidates = [...new Set([origin, ctx.selfUrl])].map((base) => base + (req.url ?? ""));
+  const check = verifySignedUrl(candidates, ctx.apiKey);
+  if (!check.ok) return sendJson(res, 403, { error: check.reason });
 
   const range = byteRange(req.headers.range, file.size);
   if (range === "unsatisfiable") {

@@ -40,6 +40,10 @@ export async function startUploadStandIn(opts: UploadStandInOptions): Promise<Up
   };
 
   const server = createServer((req, res) => {
+    if (opts.trace) {
+      const started = performance.now();
+      res.once("finish", () => ctx.log(`${req.method} ${req.url?.split("?")[0]} ${res.statusCode} ${Math.round(performance.now() - started)} ms`));
+    }
     try {
       route(ctx, req, res)?.catch((error: unknown) => fail(ctx, res, error));
     } catch (error) {

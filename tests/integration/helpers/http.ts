@@ -1,14 +1,19 @@
 import { NextRequest } from "next/server";
 import { encode } from "next-auth/jwt";
+import { pool } from "@/db/client";
 import { env } from "@/lib/env";
 
 // Route handlers differ in their params type; the harness only needs to call them.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
 type Handler = (req: NextRequest, ctx: { params: Promise<any> }) => Promise<Response>;
 
-/** A real next-auth session cookie for this user, signed with the app's secret. */
-export async function sessionCookie(user: { id: string; name: string; email: string }) {
-  const jwt = await encode({ token: { sub: user.id, name: user.name, email: user.email }, secret: env.NEXTAUTH_SECRET });
+/**
+ * A real next-auth session cookie for this user, signed with the app's secret, issued under the user's current
+ * session version (or `sessionVersion`, to forge an old one).
+ */
+export async function sessionCookie(user: { id: string; name: string; email: string }, sessionVersion?: number) {
+  const sv = sessionVersion ?? (await pool.query("select session_version from users where id = $1", [user.id])).rows[0]?.session_version ?? 0;
+  const jwt = await encode({ token: { sub: user.id, name: user.name, email: user.email, sv }, secret: env.NEXTAUTH_SECRET });
   return `next-auth.session-token=${jwt}`;
 }
 

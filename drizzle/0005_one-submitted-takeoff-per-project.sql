@@ -1,0 +1,1 @@
+CREATE UNIQUE INDEX "takeoffs_one_submitted_per_project" ON "takeoffs" USING btree ("project_id") WHERE "takeoffs"."status" = 'submitted';

@@ -1,0 +1,4 @@
+ALTER TABLE "invitations" ADD COLUMN "superseded_at" timestamp with time zone;--> statement-breakpoint
+ALTER TABLE "invitations" ADD COLUMN "superseded_by" uuid;--> statement-breakpoint
+ALTER TABLE "invitations" ADD CONSTRAINT "invitations_superseded_by_invitations_id_fk" FOREIGN KEY ("superseded_by") REFERENCES "public"."invitations"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
+CREATE UNIQUE INDEX "invitations_one_live_per_address" ON "invitations" USING btree ("org_id","email") WHERE "invitations"."used_at" is null and "invitations"."revoked_at" is null and "invitations"."superseded_at" is null;

@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import {
   ceilToMultiple,
   decimalToFraction,
+  toNumber,
   exact,
   Fraction,
   gcdFractions,
@@ -107,5 +108,21 @@ describe("fraction.js arithmetic against a second rational implementation (BigIn
       ),
       { numRuns: 200 },
     );
+  });
+});
+
+describe("toNumber", () => {
+  it("gives back the double a decimal was written from, even with 17 significant digits", () => {
+    expect(toNumber(decimalToFraction("0.043129050170020077"))).toBe(0.043129050170020077);
+    fc.assert(
+      fc.property(fc.double({ noNaN: true, noDefaultInfinity: true }), (x) => {
+        expect(toNumber(decimalToFraction(String(x)))).toBe(x === 0 ? 0 : x);
+      }),
+    );
+  });
+  it("rounds a non-terminating fraction to the nearest double", () => {
+    expect(toNumber(new Fraction(1n, 3n))).toBe(1 / 3);
+    expect(toNumber(new Fraction(2n ** 60n + 1n, 3n * 2n ** 60n))).toBe(1 / 3);
+    expect(toNumber(new Fraction(-5n, 127n))).toBe(-5 / 127);
   });
 });

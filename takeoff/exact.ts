@@ -97,3 +97,28 @@ export function ceilToMultiple(value: Fraction, step: Fraction): Fraction {
   const q = value.div(step);
   return step.mul(ceilDiv(numer(q), q.d));
 }
+
+const EXACT_INTEGER = 2n ** 53n;
+const GUARD_DIGITS = 40;
+
+/**
+ * The double nearest to f. fraction.js divides Number(n) by Number(d), which rounds twice once either
+ * passes 2^53, so "0.043129050170020077" read back as a different double and a stored length
+ * shown for editing and saved untouched came back changed. Small terms still divide directly (one
+ * correctly rounded division); larger ones go through a decimal string, which Number() rounds once:
+ * written out exactly when it terminates (every tie between two doubles does), else to 40 digits and
+ * a sticky 1 so a non-terminating value never looks like a tie.
+ */
+export function toNumber(f: Fraction): number {
+  if (f.n < EXACT_INTEGER && f.d < EXACT_INTEGER) return Number(numer(f)) / Number(f.d);
+  let rest = f.d;
+  let twos = 0;
+  let fives = 0;
+  while (rest % 2n === 0n) (rest /= 2n), twos++;
+  while (rest % 5n === 0n) (rest /= 5n), fives++;
+  const k = rest === 1n ? Math.max(twos, fives) : Math.max(0, GUARD_DIGITS + f.d.toString().length - f.n.toString().length);
+  const scaled = f.n * 10n ** BigInt(k);
+  const digits = `${scaled / f.d}${scaled % f.d === 0n ? "" : "1"}`;
+  const exponent = k + (scaled % f.d === 0n ? 0 : 1);
+  return Number(`${f.s < 0n ? "-" : ""}${digits}e-${exponent}`);
+}

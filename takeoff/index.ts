@@ -21,7 +21,7 @@ export { pieceDemand, MATERIALS, type PieceDemand } from "./demand";
 export { planStock } from "./stock-plan/plan-stock";
 export { orderMaterials, summarizeOrders, type MaterialOrder, type MaterialOrderSummary, type StockCatalog } from "./order";
 export { parseLength } from "./length-parse";
-export { formatLength, type LengthStyle } from "./length-format";
+export { formatLength, formatLengthExact, type LengthStyle } from "./length-format";
 export { bidTotal, labourCost, labourMinutes, materialCost, type Bid, type BidRates, type LabourRates } from "./pricing";
 export { wallSetback, wallBuildUpSchema, type WallBuildUp } from "./wall-build-up";
 export { DRESSED_LUMBER, GYPSUM_BOARD_THICKNESS, type GypsumBoard, type NominalLumber, type StudSize } from "./nominal-sizes";

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { formatLength } from "./length-format";
+import { formatLength, formatLengthExact } from "./length-format";
+import { parseLength } from "./length-parse";
 import { Q } from "./testing/rational";
 
 describe("formatLength", () => {
@@ -52,5 +53,41 @@ describe("formatLength", () => {
 
   it("throws on non-finite input", () => {
     expect(() => formatLength(Number.POSITIVE_INFINITY)).toThrow(/finite/);
+  });
+});
+
+describe("formatLengthExact (what an edit form starts with)", () => {
+  it.each([
+    [3 / 32, '3/32"'],
+    [5 / 32, '5/32"'],
+    [0.125, '1/8"'],
+    [15 / 64, '15/64"'],
+    [2 + 11 / 16, '2 11/16"'],
+    [0.75, '3/4"'],
+    [36, '36"'],
+    [0, '0"'],
+    [-3 / 32, '-3/32"'],
+  ])("%d → %s", (inches, text) => {
+    expect(formatLengthExact(inches)).toBe(text);
+  });
+
+  it("writes a value off the 1/64 grid (typed in millimetres) as decimal inches", () => {
+    expect(formatLengthExact(2.5 * (5 / 127))).toBe('0.09842519685039369"');
+    expect(formatLengthExact(1.5e-7)).toBe('0.00000015"');
+  });
+
+  it("reads back as exactly the same number: store → show → save untouched → same value", () => {
+    fc.assert(
+      fc.property(
+        fc.oneof(
+          fc.integer({ min: 0, max: 64 * 200 }).map((n) => n / 64),
+          // Down to a millionth of an inch: finer than anything a person types or a saw cuts.
+          fc.double({ min: 1e-6, max: 2000, noNaN: true }),
+        ),
+        (x) => {
+          expect(parseLength(formatLengthExact(x))).toBe(x);
+        },
+      ),
+    );
   });
 });

@@ -1,4 +1,4 @@
-import { decimalToFraction, Fraction } from "./exact";
+import { decimalToFraction, Fraction, toNumber } from "./exact";
 
 /**
  * Inches per metric unit. 1 in = 25.4 mm exactly (International Yard and Pound
@@ -62,5 +62,5 @@ export function parseLengthExact(text: string): Fraction {
  * not rounded: rounding to the saw's 1/16 happens when lengths are output.
  */
 export function parseLength(text: string): number {
-  return parseLengthExact(text).valueOf();
+  return toNumber(parseLengthExact(text));
 }

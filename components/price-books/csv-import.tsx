@@ -6,6 +6,7 @@ import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
 import { api, ApiError } from "@/lib/api-client";
 import { BASE_COLUMNS } from "@/lib/price-book/csv";
+import { decodeCsvBytes, type CsvEncoding } from "@/lib/price-book/csv-encoding";
 import type { ImportMode, ImportPlan } from "@/lib/price-book/import-plan";
 import { ImportPreview } from "./import-preview";
 
@@ -21,6 +22,7 @@ export function CsvImport({ base, onApplied }: { base: string; onApplied: () => 
   const id = useId();
   const [csv, setCsv] = useState("");
   const [fileName, setFileName] = useState<string | null>(null);
+  const [encoding, setEncoding] = useState<CsvEncoding | null>(null);
   const [mode, setMode] = useState<ImportMode>("merge");
   const [preview, setPreview] = useState<Preview | null>(null);
   const [showUnchanged, setShowUnchanged] = useState(false);
@@ -36,8 +38,12 @@ export function CsvImport({ base, onApplied }: { base: string; onApplied: () => 
     changed();
     if (!file) return;
     if (file.size > MAX_BYTES) return setNote({ tone: "error", text: "That file is over 2 MB; split it and import the parts." });
+    // Decoded here, not with file.text(): that reads every file as UTF-8 and turns "Érable" into "�rable".
+    const decoded = decodeCsvBytes(new Uint8Array(await file.arrayBuffer()));
+    if (!decoded.ok) return setNote({ tone: "error", text: decoded.message });
     setFileName(file.name);
-    setCsv(await file.text());
+    setEncoding(decoded.encoding);
+    setCsv(decoded.text);
   }
 
   async function run(apply: boolean) {
@@ -64,14 +70,19 @@ export function CsvImport({ base, onApplied }: { base: string; onApplied: () => 
       <div className="space-y-4">
         <p className="text-sm text-graphite-700">
           Columns: <code className="text-xs">{BASE_COLUMNS.join(", ")}</code>, then one <code className="text-xs">price 8&apos;</code> column per stock length (empty
-          where an item is not sold in that length). Export first to get a file to edit. Rows are matched to items by supplier code, or else by name and kind.
+          where an item is not sold in that length). Commas or tabs separate values; sizes in millimetres are rounded to the nearest 1/16&quot;. Export first to get a file to edit. Rows are matched to items by supplier code, or else by name and kind.
         </p>
         <div className="flex flex-wrap items-center gap-3 text-sm">
           <label htmlFor={`${id}-file`} className="font-medium text-graphite-700">
             CSV file
           </label>
-          <input id={`${id}-file`} type="file" accept=".csv,text/csv" onChange={pick} className="text-sm" />
+          <input id={`${id}-file`} type="file" accept=".csv,.tsv,.txt,text/csv,text/tab-separated-values,text/plain" onChange={pick} className="text-sm" />
           {fileName && <span className="text-graphite-600">{fileName}</span>}
+          {fileName && encoding && encoding !== "UTF-8" && (
+            <span className="text-graphite-900" role="note">
+              Read as {encoding === "Windows-1252" ? "Windows-1252 (Western European)" : encoding} text: check accented names in the preview.
+            </span>
+          )}
         </div>
         <details>
           <summary className="cursor-pointer text-sm font-medium text-spruce-700">…or paste the CSV</summary>
@@ -79,7 +90,7 @@ export function CsvImport({ base, onApplied }: { base: string; onApplied: () => 
             aria-label="CSV to import"
             className="mt-2 h-32 w-full rounded-md border border-graphite-400 bg-white p-2 font-mono text-xs"
             value={csv}
-            onChange={(e) => (setCsv(e.target.value), setFileName(null), changed())}
+            onChange={(e) => (setCsv(e.target.value), setFileName(null), setEncoding(null), changed())}
           />
         </details>
         <fieldset className="space-y-1 text-sm">

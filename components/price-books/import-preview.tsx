@@ -1,7 +1,7 @@
 "use client";
 
 import type { ImportAction, ImportPlan } from "@/lib/price-book/import-plan";
-import { describeDiff, itemLabel } from "@/lib/price-book/describe";
+import { describeDiff, itemDetails, itemLabel } from "@/lib/price-book/describe";
 import { KIND_LABELS } from "@/lib/price-book/kinds";
 
 // Each action has its own mark and word, so colour never carries the meaning alone.
@@ -50,6 +50,15 @@ export function ImportPreview({ plan, showUnchanged }: { plan: ImportPlan; showU
           ))}
         </ul>
       )}
+      {plan.fileNotes.length > 0 && (
+        <ul className="space-y-1 rounded-md border border-brass-400 bg-maple-50 px-3 py-2 text-sm text-graphite-900" aria-label="How the file was read">
+          {plan.fileNotes.map((n) => (
+            <li key={`${n.line}-${n.message}`}>
+              <span aria-hidden>ℹ </span>Line <span className="num">{n.line}</span>: {n.message}
+            </li>
+          ))}
+        </ul>
+      )}
       {(rows.length > 0 || plan.deletions.length > 0) && (
         <div className="overflow-x-auto rounded-lg border border-maple-200 bg-white">
           <table className="w-full border-collapse text-sm">
@@ -86,9 +95,16 @@ export function ImportPreview({ plan, showUnchanged }: { plan: ImportPlan; showU
                         ))}
                       </ul>
                     ) : r.action === "create" ? (
-                      <span className="text-graphite-700">New item</span>
+                      <span className="text-graphite-900">New item: {r.item ? itemDetails(r.item) : ""}</span>
                     ) : (
                       <span className="text-graphite-600">No change</span>
+                    )}
+                    {r.notes.length > 0 && (
+                      <ul className="mt-1 text-xs text-brass-700">
+                        {r.notes.map((n) => (
+                          <li key={n}>ℹ {n}</li>
+                        ))}
+                      </ul>
                     )}
                   </td>
                 </tr>

@@ -10,6 +10,8 @@ import { SortableTh } from "@/components/ui/sortable-th";
 
 /** On a narrow screen the table scrolls sideways; the name stays in view so each row stays named. */
 const STICKY = "sticky left-0 z-10";
+// The delete button stays at the right edge, however many stock-length columns push the table wide.
+const PIN_END = "sticky right-0 z-10 bg-white shadow-[-6px_0_6px_-6px_rgba(31,34,37,0.25)]";
 const filterInput = "rounded-md border border-graphite-400 bg-white px-2.5 py-1.5 text-sm text-graphite-900 placeholder:text-graphite-500";
 
 /** The book's items: sortable by any column, filtered by text and kind, edited in place by admins. */
@@ -74,6 +76,7 @@ export function ItemsTable({ items, lengths }: { items: PriceBookItemView[]; len
                         sorted={sorted}
                         end={end}
                         sticky={header.column.id === "name"}
+                        pinEnd={header.column.id === "actions"}
                         onToggle={header.column.getCanSort() ? header.column.getToggleSortingHandler() : undefined}
                       >
                         <table.FlexRender header={header} />
@@ -95,8 +98,9 @@ export function ItemsTable({ items, lengths }: { items: PriceBookItemView[]; len
                       .map((c) => {
                         const meta = c.column.columnDef.meta;
                         const name = c.column.id === "name";
+                        const actions = c.column.id === "actions";
                         return (
-                          <td key={c.id} className={`px-1.5 py-1 ${meta?.align === "end" ? "num whitespace-nowrap" : ""} ${meta?.width ?? ""} ${name ? `${STICKY} bg-white font-semibold` : ""}`}>
+                          <td key={c.id} className={`px-1.5 py-1 ${meta?.align === "end" ? "num whitespace-nowrap" : ""} ${meta?.width ?? ""} ${name ? `${STICKY} bg-white font-semibold` : ""} ${actions ? PIN_END : ""}`}>
                             <table.FlexRender cell={c} />
                           </td>
                         );

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { count, inchesText, usd } from "@/lib/takeoffs/format";
 import type { TakeoffDetail } from "@/lib/takeoffs/view";
+import { formatLengthExact } from "@/takeoff";
 import { LocalTime } from "./local-time";
 import { PrintButton } from "./print-button";
 import { TakeoffStatus } from "./takeoff-status";
@@ -34,7 +35,7 @@ export function TakeoffHeader({ t, listHref }: { t: TakeoffDetail; listHref: str
             </dd>
             <dt className="text-graphite-600">Allowances</dt>
             <dd>
-              Saw kerf {inchesText(settings.kerf)} · waste allowance {settings.wastePercent} % extra boards
+              Saw kerf {formatLengthExact(settings.kerf)} · waste allowance {settings.wastePercent} % extra boards
             </dd>
             {alternate && (
               <>

@@ -2,10 +2,20 @@ import Link from "next/link";
 import { count, usd } from "@/lib/takeoffs/format";
 import type { TakeoffListItem } from "@/lib/takeoffs/view";
 import { LocalTime } from "./local-time";
+import { TakeoffRowActions } from "./takeoff-row-actions";
 import { TakeoffStatus } from "./takeoff-status";
 
 /** The project's saved takeoffs, newest first: one line each with the figures an estimator compares. */
-export function TakeoffList({ takeoffs, pageBase }: { takeoffs: TakeoffListItem[]; pageBase: string }) {
+export function TakeoffList({
+  takeoffs,
+  pageBase,
+  edit,
+}: {
+  takeoffs: TakeoffListItem[];
+  pageBase: string;
+  /** Given to roles that may rename and delete drafts. */
+  edit?: { apiBase: string; listKey: readonly unknown[] };
+}) {
   return (
     <div className="relative overflow-x-auto rounded-lg border border-maple-200 bg-white">
       <table className="w-full border-collapse text-sm">
@@ -18,6 +28,11 @@ export function TakeoffList({ takeoffs, pageBase }: { takeoffs: TakeoffListItem[
             <th scope="col" className="px-2 py-2 text-right font-semibold">Openings</th>
             <th scope="col" className="px-2 py-2 text-right font-semibold">Bid total</th>
             <th scope="col" className="px-2 py-2 font-semibold">Status</th>
+            {edit && (
+              <th scope="col" className="px-2 py-2 font-semibold">
+                <span className="sr-only">Actions</span>
+              </th>
+            )}
           </tr>
         </thead>
         <tbody>
@@ -42,6 +57,11 @@ export function TakeoffList({ takeoffs, pageBase }: { takeoffs: TakeoffListItem[
               <td className="px-2 py-1.5">
                 <TakeoffStatus status={t.status} />
               </td>
+              {edit && (
+                <td className="px-2 py-1.5">
+                  <TakeoffRowActions takeoff={t} apiBase={edit.apiBase} listKey={edit.listKey} />
+                </td>
+              )}
             </tr>
           ))}
         </tbody>

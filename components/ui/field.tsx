@@ -1,7 +1,9 @@
 import type { InputHTMLAttributes, ReactNode, SelectHTMLAttributes } from "react";
 
+// A disabled control (its own flag or a disabled fieldset) reads as not editable: dashed border, surface
+// tint, no-entry cursor; the text keeps AA contrast so the value can still be read.
 const control =
-  "block w-full rounded-md border border-graphite-400 bg-white px-3 py-2 text-sm text-graphite-900 placeholder:text-graphite-500 aria-[invalid=true]:border-alarm-600";
+  "block w-full rounded-md border border-graphite-400 bg-white px-3 py-2 text-sm text-graphite-900 placeholder:text-graphite-500 aria-[invalid=true]:border-alarm-600 disabled:cursor-not-allowed disabled:border-dashed disabled:bg-maple-100 disabled:text-graphite-600 disabled:shadow-none";
 
 /** A labelled control with its message underneath; the message is tied to the control for screen readers. */
 export function Field({ label, name, error, hint, children }: { label: string; name: string; error?: string; hint?: ReactNode; children: ReactNode }) {

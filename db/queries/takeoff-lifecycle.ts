@@ -1,7 +1,9 @@
-import { and, eq } from "drizzle-orm";
-import { db } from "../client";
+import { and, eq, ne } from "drizzle-orm";
+import { db, type Tx } from "../client";
+import { isUniqueViolation } from "../errors";
 import { projects, takeoffs } from "../schema";
 import { AppError, conflict, notFound } from "@/lib/errors";
+import { lockProject } from "./projects";
 import { getTakeoff } from "./takeoffs";
 import type { ProjectScope } from "./project-scope";
 
@@ -30,9 +32,15 @@ export async function deleteTakeoff(s: ProjectScope, id: string) {
   if (rows.length === 0) throw locked();
 }
 
+const ONE_SUBMITTED = "takeoffs_one_submitted_per_project";
+const alreadyBid = (name: string) =>
+  conflict(`"${name}" is already this project's submitted bid; a project has one. Make a copy of it to revise the bid.`);
+
 /**
  * Marks the takeoff as the submitted bid: it is locked from then on, and the project's status says
- * "submitted" (a project that was already won or lost keeps that status).
+ * "submitted" (a project that was already won or lost keeps that status). One takeoff per project is
+ * submitted: the project row is locked first so two submits queue, and the partial unique index
+ * refuses a second one even if something else gets past that.
  */
 export async function submitTakeoff(s: ProjectScope & { userId: string }, id: string) {
   const current = await getTakeoff(s, id);
@@ -46,22 +54,39 @@ export async function submitTakeoff(s: ProjectScope & { userId: string }, id: st
       { code: "placeholder_prices" },
     );
   }
-  await db.transaction(async (tx) => {
-    const rows = await tx
-      .update(takeoffs)
-      .set({ status: "submitted", submittedAt: new Date(), submittedBy: s.userId })
-      .where(and(scoped(s, id), eq(takeoffs.status, "draft")))
-      .returning({ id: takeoffs.id });
-    if (rows.length === 0) {
-      const [exists] = await tx.select({ id: takeoffs.id }).from(takeoffs).where(scoped(s, id));
-      throw exists ? conflict("This takeoff is already the submitted bid.") : notFound("No such takeoff.");
-    }
-    await tx
-      .update(projects)
-      .set({ status: "submitted", updatedAt: new Date() })
-      .where(and(eq(projects.orgId, s.orgId), eq(projects.id, s.projectId), eq(projects.status, "draft")));
-  });
+  try {
+    await db.transaction(async (tx) => {
+      await lockProject(s, tx);
+      const [other] = await tx
+        .select({ name: takeoffs.name })
+        .from(takeoffs)
+        .where(and(eq(takeoffs.orgId, s.orgId), eq(takeoffs.projectId, s.projectId), eq(takeoffs.status, "submitted"), ne(takeoffs.id, id)))
+        .limit(1);
+      if (other) throw alreadyBid(other.name);
+      await markSubmitted(s, id, tx);
+    });
+  } catch (error) {
+    if (!isUniqueViolation(error, ONE_SUBMITTED)) throw error;
+    const [other] = await db.select({ name: takeoffs.name }).from(takeoffs).where(and(eq(takeoffs.orgId, s.orgId), eq(takeoffs.projectId, s.projectId), eq(takeoffs.status, "submitted")));
+    throw alreadyBid(other?.name ?? "Another takeoff");
+  }
   return getTakeoff(s, id);
+}
+
+async function markSubmitted(s: ProjectScope & { userId: string }, id: string, tx: Tx) {
+  const rows = await tx
+    .update(takeoffs)
+    .set({ status: "submitted", submittedAt: new Date(), submittedBy: s.userId })
+    .where(and(scoped(s, id), eq(takeoffs.status, "draft")))
+    .returning({ id: takeoffs.id });
+  if (rows.length === 0) {
+    const [exists] = await tx.select({ id: takeoffs.id }).from(takeoffs).where(scoped(s, id));
+    throw exists ? conflict("This takeoff is already the submitted bid.") : notFound("No such takeoff.");
+  }
+  await tx
+    .update(projects)
+    .set({ status: "submitted", updatedAt: new Date() })
+    .where(and(eq(projects.orgId, s.orgId), eq(projects.id, s.projectId), eq(projects.status, "draft")));
 }
 
 /** A draft copy of any takeoff (submitted or not) with the same snapshots, to continue from. */

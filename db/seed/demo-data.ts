@@ -30,8 +30,8 @@ export const demoOrgs: {
     ],
     projects: [
       { name: "Larkspur Commons — Building C", generalContractor: "Fenwick & Hale Builders", bidDue: "2027-02-12", status: "draft" },
-      { name: "Otter Creek Townhomes", generalContractor: "Greywater Construction", bidDue: "2027-01-20", status: "submitted" },
-      { name: "Millrace Senior Residences", generalContractor: "Fenwick & Hale Builders", bidDue: "2026-10-30", status: "won" },
+      { name: "Otter Creek Townhomes", generalContractor: "Greywater Construction", bidDue: "2027-01-20", status: "draft" },
+      { name: "Millrace Senior Residences", generalContractor: "Fenwick & Hale Builders", bidDue: "2026-10-30", status: "draft" },
     ],
   },
   {

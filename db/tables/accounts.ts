@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { check, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { check, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid, type AnyPgColumn } from "drizzle-orm/pg-core";
 import type { TrimSpec } from "@/takeoff";
 import type { TakeoffSettings } from "@/lib/takeoffs/types";
 import { createdAt } from "./common";
@@ -68,9 +68,19 @@ export const invitations = pgTable(
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     usedAt: timestamp("used_at", { withTimezone: true }),
     revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    // A newer invitation to the same address replaced this one; its link then says so instead of working.
+    supersededAt: timestamp("superseded_at", { withTimezone: true }),
+    supersededBy: uuid("superseded_by").references((): AnyPgColumn => invitations.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex("invitations_token_hash_key").on(t.tokenHash), index("invitations_org_idx").on(t.orgId)],
+  (t) => [
+    uniqueIndex("invitations_token_hash_key").on(t.tokenHash),
+    index("invitations_org_idx").on(t.orgId),
+    // One live invitation per address and organisation, so nobody holds two links with two roles.
+    uniqueIndex("invitations_one_live_per_address")
+      .on(t.orgId, t.email)
+      .where(sql`${t.usedAt} is null and ${t.revokedAt} is null and ${t.supersededAt} is null`),
+  ],
 );
 
 /** Failed sign-ins counted per key ("email:…" or "ip:…"), so throttling holds across server instances. */

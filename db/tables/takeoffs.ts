@@ -1,4 +1,5 @@
-import { index, jsonb, pgEnum, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
+import { index, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/lib/takeoffs/types";
 import { createdAt } from "./common";
 import { organisations, users } from "./accounts";
@@ -33,7 +34,11 @@ export const takeoffs = pgTable(
     submittedAt: timestamp("submitted_at", { withTimezone: true }),
     submittedBy: uuid("submitted_by").references(() => users.id, { onDelete: "set null" }),
   },
-  (t) => [index("takeoffs_project_idx").on(t.projectId, t.createdAt)],
+  (t) => [
+    index("takeoffs_project_idx").on(t.projectId, t.createdAt),
+    // A project is bid once: at most one of its takeoffs is the submitted bid, whatever races the app loses.
+    uniqueIndex("takeoffs_one_submitted_per_project").on(t.projectId).where(sql`${t.status} = 'submitted'`),
+  ],
 );
 
 /** Each time a bid summary was e-mailed: to whom, by whom, when. */

@@ -13,7 +13,8 @@ export interface CsvRecord {
 
 export type CsvParse = { ok: true; records: CsvRecord[] } | { ok: false; line: number; message: string };
 
-export function parseCsv(input: string): CsvParse {
+/** `delimiter` is a comma, or a tab for the tab-separated text spreadsheets also save. */
+export function parseCsv(input: string, delimiter: "," | "\t" = ","): CsvParse {
   const text = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   const records: CsvRecord[] = [];
   let fields: string[] = [];
@@ -52,7 +53,7 @@ export function parseCsv(input: string): CsvParse {
       }
       continue;
     }
-    if (c === ",") {
+    if (c === delimiter) {
       endField();
     } else if (c === "\r" || c === "\n") {
       if (c === "\r" && text[i + 1] === "\n") i++;

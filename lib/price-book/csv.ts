@@ -1,6 +1,7 @@
-import { parseLength } from "@/takeoff";
+import { formatLengthExact, parseLength } from "@/takeoff";
 import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
 import { formatCsv, parseCsv } from "./csv-grammar";
+import { hasReplacementCharacter, SAVE_AS_UTF8 } from "./csv-encoding";
 import { MATERIAL_KINDS, readKind } from "./kinds";
 import { sameLength, sizeText, stockLengthText } from "./length-text";
 import { moneyText } from "./numbers";
@@ -66,21 +67,45 @@ export interface CsvItemRow {
   item: ItemFields | null;
   /** Column → message, for the columns this row got wrong (`_row` for the row as a whole). */
   errors: Record<string, string>;
+  /** What the import did to a value that is not an error, e.g. rounded a metric size to the 1/16. */
+  notes: string[];
 }
 
 export interface CsvRead {
   rows: CsvItemRow[];
   /** Problems with the file as a whole: unreadable CSV, header mistakes, too many rows. */
   fileErrors: { line: number; message: string }[];
+  /** What the import did with the file as a whole: tabs read as separators, metric columns rounded. */
+  fileNotes: { line: number; message: string }[];
+}
+
+const METRIC = /\d\s*(?:mm|cm|m)\s*$/i;
+
+/**
+ * A metric size or stock length, read to the nearest 1/16 in (half up, as formatLength rounds): trim
+ * is bought and cut in sixteenths, and 64 mm kept as 2.5196850393700787" would print as such on every
+ * screen. Returns null for anything not written in millimetres, centimetres or metres.
+ */
+function metricToSixteenth(cell: string): { inches: number; note: (label: string) => string } | null {
+  if (!METRIC.test(cell)) return null;
+  let exact: number;
+  try {
+    exact = parseLength(cell);
+  } catch {
+    return null;
+  }
+  const inches = Math.round(exact * 16) / 16;
+  return { inches, note: (label) => `${label} ${cell.trim()} read as ${formatLengthExact(inches)} (rounded to the nearest 1/16").` };
 }
 
 type Column = { kind: "base"; name: BaseColumn } | { kind: "price"; header: string; inches: number };
 
-function readHeader(cells: string[]): { columns: Column[]; errors: string[] } {
+function readHeader(cells: string[]): { columns: Column[]; errors: string[]; notes: string[] } {
   const errors: string[] = [];
+  const notes: string[] = [];
   const columns: Column[] = [];
   if (cells.length === 1 && (cells[0] ?? "").includes(";")) {
-    return { columns, errors: ["Values are separated by semicolons; save the file as comma-separated CSV."] };
+    return { columns, errors: ["Values are separated by semicolons; save the file as comma-separated CSV."], notes };
   }
   for (const raw of cells) {
     const cell = raw.trim();
@@ -91,9 +116,15 @@ function readHeader(cells: string[]): { columns: Column[]; errors: string[] } {
       columns.push({ kind: "base", name: base });
     } else if (price) {
       let inches = NaN;
-      try {
-        inches = parseLength(price[1]!);
-      } catch {}
+      const metric = metricToSixteenth(price[1]!);
+      if (metric) {
+        inches = metric.inches;
+        notes.push(metric.note(`Column "${cell}":`));
+      } else {
+        try {
+          inches = parseLength(price[1]!);
+        } catch {}
+      }
       if (!(inches >= 12 && inches <= 12 * 100)) errors.push(`Column "${cell}": write the stock length in feet, like price 8'.`);
       else if (columns.some((c) => c.kind === "price" && sameLength(c.inches, inches))) errors.push(`Two columns price the ${stockLengthText(inches)} length.`);
       columns.push({ kind: "price", header: cell, inches });
@@ -104,14 +135,20 @@ function readHeader(cells: string[]): { columns: Column[]; errors: string[] } {
   const missing = BASE_COLUMNS.filter((b) => !columns.some((c) => c.kind === "base" && c.name === b));
   if (missing.length > 0) errors.push(`Missing column${missing.length === 1 ? "" : "s"}: ${missing.join(", ")}.`);
   if (!columns.some((c) => c.kind === "price")) errors.push(`No price columns: add one per stock length, headed like price 8'.`);
-  return { columns, errors };
+  return { columns, errors, notes };
 }
 
 const FIELD_COLUMN: Record<string, BaseColumn> = { faceWidth: "face_width", supplierCode: "supplier_code", name: "name", kind: "kind", thickness: "thickness", species: "species" };
 
 function readRow(line: number, cells: string[], columns: Column[]): CsvItemRow {
   const at = (name: BaseColumn) => unguard((cells[columns.findIndex((c) => c.kind === "base" && c.name === name)] ?? "").trim());
-  const row: CsvItemRow = { line, name: at("name"), kind: at("kind"), item: null, errors: {} };
+  const row: CsvItemRow = { line, name: at("name"), kind: at("kind"), item: null, errors: {}, notes: [] };
+  const size = (column: "face_width" | "thickness", label: string) => {
+    const metric = metricToSixteenth(at(column));
+    if (!metric) return at(column);
+    row.notes.push(metric.note(label));
+    return metric.inches;
+  };
   const extra = cells.slice(columns.length);
   if (cells.length < columns.length || extra.some((c) => c.trim() !== "")) {
     row.errors._row = `This row has ${cells.length} values; the header has ${columns.length} columns. Check for an unquoted comma.`;
@@ -121,8 +158,8 @@ function readRow(line: number, cells: string[], columns: Column[]): CsvItemRow {
   const parsed = priceBookItemCreateSchema.safeParse({
     name: row.name,
     kind: readKind(row.kind) ?? row.kind,
-    faceWidth: at("face_width"),
-    thickness: at("thickness"),
+    faceWidth: size("face_width", "Face width"),
+    thickness: size("thickness", "Thickness"),
     species: at("species"),
     supplierCode: at("supplier_code"),
     stock: priced.map((p) => ({ length: p.inches, price: p.price })),
@@ -140,20 +177,34 @@ function readRow(line: number, cells: string[], columns: Column[]): CsvItemRow {
   return row;
 }
 
-/** Reads an uploaded CSV into checked rows, each with its line number and its problems by column. */
+/** A header with tabs and no commas is tab-separated text (what spreadsheets save as "Text" or "TSV"). */
+function delimiterOf(text: string): "," | "\t" {
+  const header = text.split(/\r\n|\r|\n/, 1)[0] ?? "";
+  return header.includes("\t") && !header.includes(",") ? "\t" : ",";
+}
+
+/** Reads an uploaded CSV (or tab-separated text) into checked rows, each with its line number and its problems by column. */
 export function readItemsCsv(text: string): CsvRead {
-  const parsed = parseCsv(text);
-  if (!parsed.ok) return { rows: [], fileErrors: [{ line: parsed.line, message: parsed.message }] };
+  const fail = (line: number, message: string): CsvRead => ({ rows: [], fileErrors: [{ line, message }], fileNotes: [] });
+  if (hasReplacementCharacter(text)) {
+    const line = text.slice(0, text.indexOf("\uFFFD")).split(/\r\n|\r|\n/).length;
+    return fail(line, `Some letters could not be read (shown as �): the file was saved in another encoding. ${SAVE_AS_UTF8}`);
+  }
+  const delimiter = delimiterOf(text);
+  const parsed = parseCsv(text, delimiter);
+  if (!parsed.ok) return fail(parsed.line, parsed.message);
   const records = parsed.records.filter((r) => r.fields.some((f) => f.trim() !== ""));
   const [head, ...body] = records;
-  if (!head) return { rows: [], fileErrors: [{ line: 1, message: "The file is empty: the first row names the columns." }] };
-  const { columns, errors } = readHeader(head.fields);
-  if (errors.length > 0) return { rows: [], fileErrors: errors.map((message) => ({ line: head.line, message })) };
-  if (body.length === 0) return { rows: [], fileErrors: [{ line: head.line, message: "The file has no items below the header row." }] };
-  if (body.length > MAX_IMPORT_ROWS) {
-    return { rows: [], fileErrors: [{ line: body[MAX_IMPORT_ROWS]!.line, message: `At most ${MAX_IMPORT_ROWS} items can be imported at once.` }] };
-  }
-  return { rows: body.map((r) => readRow(r.line, r.fields, columns)), fileErrors: [] };
+  if (!head) return fail(1, "The file is empty: the first row names the columns.");
+  const { columns, errors, notes } = readHeader(head.fields);
+  if (errors.length > 0) return { rows: [], fileErrors: errors.map((message) => ({ line: head.line, message })), fileNotes: [] };
+  if (body.length === 0) return fail(head.line, "The file has no items below the header row.");
+  if (body.length > MAX_IMPORT_ROWS) return fail(body[MAX_IMPORT_ROWS]!.line, `At most ${MAX_IMPORT_ROWS} items can be imported at once.`);
+  const fileNotes = [
+    ...(delimiter === "\t" ? [{ line: head.line, message: "Values are separated by tabs; read as tab-separated." }] : []),
+    ...notes.map((message) => ({ line: head.line, message })),
+  ];
+  return { rows: body.map((r) => readRow(r.line, r.fields, columns)), fileErrors: [], fileNotes };
 }
 
 /** "Alder Bend Millwork — 2027" on 5 Jan 2027 → alder-bend-millwork-2027-items-2027-01-05.csv (ASCII, for the header). */

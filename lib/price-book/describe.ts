@@ -87,3 +87,10 @@ export function bookSummary(action: "create" | "update" | "delete", name: string
   if (action === "delete") return clip(`Deleted price book "${name}" and its ${itemCount} item${itemCount === 1 ? "" : "s"}`);
   return clip(`Changed ${describeDiff(diff).join("; ")}`);
 }
+
+/** An item's values on one line, as the import preview shows a new row: 2 1/2" × 11/16", poplar · 8' $14.20, 16' $28.00. */
+export function itemDetails(i: ItemFields): string {
+  const species = i.species ? `, ${i.species}` : "";
+  const code = i.supplierCode ? ` · code ${i.supplierCode}` : "";
+  return `${sizeText(i.faceWidth)} × ${sizeText(i.thickness)}${species} · ${formatValue("stock", i.stock)}${code}`;
+}

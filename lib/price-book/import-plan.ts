@@ -18,6 +18,8 @@ export interface ImportRowPlan {
   item: ItemFields | null;
   diff: FieldDiff;
   errors: Record<string, string>;
+  /** Values the import adjusted (a metric size rounded to the 1/16), shown beside the row. */
+  notes: string[];
 }
 
 export interface ImportPlan {
@@ -27,6 +29,7 @@ export interface ImportPlan {
   /** Items the file does not mention: removed only when the whole list is replaced. */
   deletions: PriceBookItemView[];
   fileErrors: CsvRead["fileErrors"];
+  fileNotes: CsvRead["fileNotes"];
   counts: Record<ImportAction | "delete", number>;
 }
 
@@ -46,6 +49,7 @@ export function planImport(current: readonly PriceBookItemView[], read: CsvRead,
     item: r.item,
     diff: {},
     errors: { ...r.errors },
+    notes: r.notes,
   }));
   const readable = rows.filter((r) => r.item);
   const claimedBy = new Map<string, ImportRowPlan>();
@@ -97,7 +101,7 @@ export function planImport(current: readonly PriceBookItemView[], read: CsvRead,
   const deletions = mode === "replace" ? current.filter((i) => !claimedBy.has(i.id) || claimedBy.get(i.id)!.action === "error") : [];
   const counts = { create: 0, update: 0, unchanged: 0, error: 0, delete: deletions.length };
   for (const r of rows) counts[r.action]++;
-  return { mode, ok: read.fileErrors.length === 0 && counts.error === 0, rows, deletions, fileErrors: read.fileErrors, counts };
+  return { mode, ok: read.fileErrors.length === 0 && counts.error === 0, rows, deletions, fileErrors: read.fileErrors, fileNotes: read.fileNotes, counts };
 }
 
 /** Two rows of one file naming the same supplier code, or the same name and kind: the later one is wrong. */

@@ -30,6 +30,12 @@ describe("comparing takeoffs", () => {
     ]);
   });
 
+  it("a kerf change finer than the 1/16 is written exactly (3/32\" → 1/8\", not 1/8\" → 1/8\")", async () => {
+    const a = await takeoff("A", testInputs({ settings: { kerf: 3 / 32, wastePercent: 10 } }), testPrices());
+    const b = await takeoff("B", testInputs({ settings: { kerf: 0.125, wastePercent: 10 } }), testPrices());
+    expect(explainDifferences(a, b)).toContain('Kerf: 3/32" → 1/8".');
+  });
+
   it("nothing to explain between identical runs", async () => {
     const a = await takeoff("A", testInputs(), testPrices());
     const b = await takeoff("B", testInputs(), testPrices());

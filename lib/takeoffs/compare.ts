@@ -1,4 +1,4 @@
-import { formatLength, MATERIALS, type Material } from "@/takeoff";
+import { formatLength, formatLengthExact, MATERIALS, type Material } from "@/takeoff";
 import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "./types";
 
 export interface ComparedTakeoff {
@@ -98,7 +98,8 @@ export function explainDifferences(base: ComparedTakeoff, other: ComparedTakeoff
   if (base.prices.taxRate !== other.prices.taxRate) out.push(`Tax: ${pct(base.prices.taxRate)} → ${pct(other.prices.taxRate)}.`);
   const sa = base.inputs.settings;
   const sb = other.inputs.settings;
-  if (sa.kerf !== sb.kerf) out.push(`Kerf: ${formatLength(sa.kerf)} → ${formatLength(sb.kerf)}.`);
+  // Exact: 3/32" and 1/8" both round to 1/8", which would read "Kerf: 1/8" → 1/8"".
+  if (sa.kerf !== sb.kerf) out.push(`Kerf: ${formatLengthExact(sa.kerf)} → ${formatLengthExact(sb.kerf)}.`);
   if (sa.wastePercent !== sb.wastePercent) out.push(`Waste allowance: ${sa.wastePercent}% → ${sb.wastePercent}%.`);
   return out;
 }

@@ -20,7 +20,7 @@ import { UTApi, UTFile } from "uploadthing/server";
  * The state a bid starts from, set up directly (the plans and sign-up screens have their own tests):
  * a company with an admin, an estimator and a project manager, a tagged project and a price book.
  */
-export async function seedBidWorld(id: string) {
+export async function seedBidWorld(id: string, more?: (w: { orgId: string; projectId: string; adminId: string; estimatorId: string }) => Promise<void>) {
   const password = "finish-nailer-5555";
   const orgName = `Harrowgate Trim ${id}`;
   const { user: admin, organisation } = await signUpUser({ name: "Ada Harrow", email: `ada.${id}@harrowgate.test`, password, organisationName: orgName });
@@ -54,6 +54,8 @@ export async function seedBidWorld(id: string) {
   }
   await seedDemoPriceBook(organisation.id, admin.id);
   // The pool stays open: several spec files seed a world in the same worker process.
+  // A spec's own additions, while the pool is still open.
+  await more?.({ orgId: organisation.id, projectId: project.id, adminId: admin.id, estimatorId: estimator.id });
 
   return {
     password,

@@ -58,7 +58,7 @@ const routes: RouteCase[] = [
   { name: "list projects", handler: projectsRoute.GET, method: "GET", params: org, allowed: ["admin", "estimator", "project_manager"], okStatus: 200 },
   { name: "create project", handler: projectsRoute.POST, method: "POST", params: org, body: () => ({ name: `Alder Yard ${unique()}` }), allowed: ["admin", "estimator"], okStatus: 201 },
   { name: "read project", handler: projectRoute.GET, method: "GET", params: (w) => ({ ...org(w), projectId: w.project.id }), allowed: ["admin", "estimator", "project_manager"], okStatus: 200 },
-  { name: "update project", handler: projectRoute.PATCH, method: "PATCH", params: (w) => ({ ...org(w), projectId: w.project.id }), body: () => ({ status: "submitted", name: "Renamed" }), allowed: ["admin", "estimator"], okStatus: 200 },
+  { name: "update project", handler: projectRoute.PATCH, method: "PATCH", params: (w) => ({ ...org(w), projectId: w.project.id }), body: () => ({ name: "Renamed" }), allowed: ["admin", "estimator"], okStatus: 200 },
   { name: "archive project", handler: projectRoute.PATCH, method: "PATCH", params: (w) => ({ ...org(w), projectId: w.project.id }), body: () => ({ archived: true }), allowed: ["admin", "estimator"], okStatus: 200 },
   { name: "list members", handler: membersRoute.GET, method: "GET", params: org, allowed: ["admin", "estimator", "project_manager"], okStatus: 200 },
   { name: "change a role", handler: memberRoute.PATCH, method: "PATCH", params: (w) => ({ ...org(w), memberId: w.spare.membershipId }), body: () => ({ role: "project_manager" }), allowed: ["admin"], okStatus: 200 },

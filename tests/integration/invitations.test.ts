@@ -198,3 +198,55 @@ describe("accepting an invitation is throttled like signing in", () => {
     expect(await snapshot()).toBe(before);
   });
 });
+
+describe("one live invitation per address", () => {
+  async function send(w: Awaited<ReturnType<typeof makeOrg>>, email: string, role: string) {
+    const tokens = async () => new Set((await readOutbox(outboxDir())).filter((m) => m.to.includes(email)).map((m) => m.text.match(/\/invite\/([A-Za-z0-9_-]+)/)![1]!));
+    const before = await tokens();
+    const res = await call(invitationsRoute.POST, { method: "POST", path: "/api/x", params: { orgSlug: w.org.slug }, body: { email, role }, cookie: await sessionCookie(w.people.admin) });
+    const token = [...(await tokens())].find((t) => !before.has(t));
+    return { res, token: token! };
+  }
+  const pending = async (w: Awaited<ReturnType<typeof makeOrg>>) =>
+    (await call(invitationsRoute.GET, { method: "GET", path: "/api/x", params: { orgSlug: w.org.slug }, cookie: await sessionCookie(w.people.admin) })).json
+      .invitations as { email: string; role: string }[];
+
+  it("a new invitation to the same address replaces the old one, and the old link says so and changes nothing", async () => {
+    const w = await makeOrg("Wrenfield");
+    const email = `twice-${unique()}@example.test`;
+    const old = await send(w, email, "admin");
+    const fresh = await send(w, email, "estimator");
+    expect(fresh.res.status).toBe(201);
+    expect(fresh.res.json.replaced).toEqual([{ role: "admin" }]);
+    expect((await pending(w)).filter((i) => i.email === email)).toEqual([expect.objectContaining({ role: "estimator" })]);
+
+    const before = await snapshot();
+    const stale = await acceptWith({ token: old.token, name: "Ada Twice", password: "a fresh password" });
+    expect(stale.status).toBe(410);
+    expect(stale.json.error).toMatch(/replaced by a newer one/);
+    expect(await snapshot()).toBe(before);
+
+    const ok = await acceptWith({ token: fresh.token, name: "Ada Twice", password: "a fresh password" });
+    expect(ok.json).toMatchObject({ role: "estimator" });
+  });
+
+  it("two invitations sent at the same moment leave exactly one live", async () => {
+    const w = await makeOrg("Brackenby");
+    const email = `race-${unique()}@example.test`;
+    const cookie = await sessionCookie(w.people.admin);
+    const post = (role: string) => call(invitationsRoute.POST, { method: "POST", path: "/api/x", params: { orgSlug: w.org.slug }, body: { email, role }, cookie });
+    const answers = await Promise.all([post("admin"), post("estimator")]);
+    for (const a of answers) expect([201, 409]).toContain(a.status);
+    expect((await pending(w)).filter((i) => i.email === email)).toHaveLength(1);
+  });
+
+  it("the database refuses a second live invitation to one address (partial unique index)", async () => {
+    const w = await makeOrg("Marrowick");
+    const email = `direct-${unique()}@example.test`;
+    const row = { orgId: w.org.id, email, role: "estimator" as const, expiresAt: new Date(Date.now() + 86_400_000) };
+    await db.insert(invitations).values({ ...row, tokenHash: unique() });
+    await expect(db.insert(invitations).values({ ...row, role: "admin", tokenHash: unique() })).rejects.toMatchObject({
+      cause: { code: "23505", constraint: "invitations_one_live_per_address" },
+    });
+  });
+});

@@ -6,7 +6,7 @@ import { snapshot } from "./helpers/snapshot";
 import { makeOrg } from "./helpers/world";
 
 describe("projects", () => {
-  it("are created, renamed, given a contractor, due date and status, archived and restored", async () => {
+  it("are created, renamed, given a contractor and due date, archived and restored", async () => {
     const w = await makeOrg("Tamarack");
     const cookie = await sessionCookie(w.people.estimator);
     const params = { orgSlug: w.org.slug };
@@ -16,8 +16,8 @@ describe("projects", () => {
     const patch = (body: unknown) =>
       call(projectRoute.PATCH, { method: "PATCH", path: "/api/x", params: { ...params, projectId: id }, body, cookie });
 
-    const edited = await patch({ name: "Bellwether Flats — Phase 2", generalContractor: "Copperline GC", bidDue: "2027-04-01", status: "submitted" });
-    expect(edited.json.project).toMatchObject({ name: "Bellwether Flats — Phase 2", generalContractor: "Copperline GC", bidDue: "2027-04-01", status: "submitted" });
+    const edited = await patch({ name: "Bellwether Flats — Phase 2", generalContractor: "Copperline GC", bidDue: "2027-04-01" });
+    expect(edited.json.project).toMatchObject({ name: "Bellwether Flats — Phase 2", generalContractor: "Copperline GC", bidDue: "2027-04-01", status: "draft", submittedTakeoff: null });
 
     expect((await patch({ archived: true })).status).toBe(200);
     const listed = await call(projectsRoute.GET, { method: "GET", path: "/api/x", params, cookie });

@@ -4,6 +4,7 @@ import * as openingTypesRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId
 import * as takeoffsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/takeoffs/route";
 import type { Role } from "@/db/schema";
 import type { TakeoffView } from "@/db/queries/takeoffs";
+import { formatLengthExact } from "@/takeoff";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
 import { addTestPriceBook } from "./helpers/takeoff-world";
@@ -45,6 +46,25 @@ describe("company settings", () => {
     expect(res.status).toBe(422);
     expect(res.json.fields?.[field]).toMatch(message);
     expect(await snapshot()).toBe(before);
+  });
+
+  it("names every wrong field in one answer, not only the first", async () => {
+    const before = await snapshot();
+    const res = await patch({ trimDefaults: { style: "stool-and-apron", casingWidth: 2.5, casingThickness: -1, reveal: 3 }, kerf: "3/4", wastePercent: "lots" });
+    expect(res.status).toBe(422);
+    expect(Object.keys(res.json.fields ?? {}).sort()).toEqual(["kerf", "trimDefaults.casingThickness", "trimDefaults.reveal", "wastePercent"]);
+    expect(await snapshot()).toBe(before);
+  });
+
+  it.each([3 / 32, 5 / 32, 15 / 64, 2.5 * (5 / 127)])("a kerf of %d survives store → show → save untouched", async (kerf) => {
+    expect((await patch({ kerf })).status).toBe(200);
+    const read = async () => (await call(settingsRoute.GET, { method: "GET", path: "/x", params: { orgSlug: home.org.slug }, cookie: await cookieOf("admin") })).json.settings as { kerf: number; wastePercent: number };
+    const stored = await read();
+    expect(stored.kerf).toBe(kerf);
+    // What the settings form shows in the kerf field, sent back as typed text.
+    const shown = formatLengthExact(stored.kerf).replace(/"$/, "");
+    expect((await patch({ kerf: shown, wastePercent: stored.wastePercent })).status).toBe(200);
+    expect((await read()).kerf).toBe(kerf);
   });
 
   it("new window types start from the company's trim defaults, and takeoffs use its kerf and waste", async () => {

@@ -21,6 +21,8 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   let comparison: { columns: ReturnType<typeof column>[]; reasons: string[][] } | null = null;
   let problem: string | null = null;
   if (ids.length > 4) problem = "Pick at most four takeoffs.";
+  // One ticked box used to compare nothing and say nothing.
+  else if (ids.length === 1) problem = "Tick at least one more takeoff to compare with it: a comparison needs two to four.";
   else if (ids.length >= 2) {
     try {
       const list = await getTakeoffsToCompare(org.orgId, ids);

@@ -6,7 +6,9 @@ import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { api, ApiError } from "@/lib/api-client";
-import { formatLength, parseLength, type TrimSpec } from "@/takeoff";
+import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
+import { settingsSchema } from "@/lib/validators/settings";
+import { formatLengthExact, parseLength, type TrimSpec } from "@/takeoff";
 
 type Settings = { trimDefaults: TrimSpec; trimDefaultsOwn: boolean; kerf: number; wastePercent: number };
 const LENGTHS = ["casingWidth", "casingThickness", "reveal", "stoolHorn", "stoolProjection", "apronInset", "extensionThickness"] as const;
@@ -20,6 +22,14 @@ const LABELS: Record<(typeof LENGTHS)[number], string> = {
   extensionThickness: "Extension thickness (blank: 3/4\")",
 };
 
+const FIELD_NAMES: Record<string, string> = {
+  ...Object.fromEntries(LENGTHS.map((k) => [`trimDefaults.${k}`, LABELS[k].replace(/ \(.*\)$/, "")])),
+  "trimDefaults.style": "Style",
+  kerf: "Saw kerf",
+  wastePercent: "Waste allowance",
+  _: "Settings",
+};
+
 /** The company's defaults: what a new window type starts from, and the kerf and waste every takeoff uses. */
 export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; initial: Settings; canWrite: boolean }) {
   const [local, setLocal] = useState<Record<string, string>>({});
@@ -29,26 +39,40 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
   const fields = save.error instanceof ApiError ? save.error.fields : {};
   const errors = { ...fields, ...local };
 
+  const t = initial.trimDefaults;
+  // Exact, so a 3/32" kerf shows as 3/32" and not as the 1/8" it would round to.
+  const len = (v: number | undefined) => (v === undefined ? "" : formatLengthExact(v).replace(/"$/, ""));
+
   function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
+    save.reset();
     const form = Object.fromEntries(new FormData(e.currentTarget)) as Record<string, string>;
     const bad: Record<string, string> = {};
     const spec: Record<string, unknown> = { style: form.style, apronReturns: form.apronReturns === "yes" };
     for (const key of LENGTHS) {
       const text = form[key]?.trim();
       if (!text) continue;
+      // A field left as shown keeps the stored number itself: nothing is re-read, so nothing can drift.
+      if (text === len(t[key])) {
+        spec[key] = t[key];
+        continue;
+      }
       try {
         spec[key] = parseLength(text);
       } catch {
         bad[`trimDefaults.${key}`] = "Write a length such as 2 1/2 or 11/16.";
       }
     }
-    setLocal(bad);
-    if (Object.keys(bad).length === 0) save.mutate({ trimDefaults: spec, kerf: form.kerf, wastePercent: form.wastePercent });
+    const kerfText = form.kerf?.trim() ?? "";
+    const body = { trimDefaults: spec, kerf: kerfText === len(initial.kerf) ? initial.kerf : kerfText, wastePercent: form.wastePercent };
+    // The API's own schema over the whole form, so every wrong field is named at once, not the first.
+    const checked = settingsSchema.safeParse(body);
+    const all = { ...(checked.success ? {} : fieldErrorsOf(checked.error)), ...bad };
+    setLocal(all);
+    if (Object.keys(all).length === 0) save.mutate(body);
   }
 
-  const t = initial.trimDefaults;
-  const len = (v: number | undefined) => (v === undefined ? "" : formatLength(v).replace(/"$/, ""));
+  const count = Object.keys(errors).length;
   return (
     <div className="max-w-3xl space-y-6">
       <h1 className="text-2xl font-bold">Company settings</h1>
@@ -89,7 +113,12 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
             </div>
           </Card>
         </fieldset>
-        {save.isError && <Notice tone="error">{save.error.message}</Notice>}
+        {count > 0 && (
+          <Notice tone="error">
+            {count === 1 ? "One field needs" : `${count} fields need`} attention: {Object.entries(errors).map(([k, m]) => `${FIELD_NAMES[k] ?? k}: ${m}`).join(" · ")}
+          </Notice>
+        )}
+        {save.isError && count === 0 && <Notice tone="error">{save.error.message}</Notice>}
         {save.isSuccess && <Notice>Saved. New window types and takeoffs use these from now on.</Notice>}
         {canWrite ? <Button type="submit" disabled={save.isPending}>Save settings</Button> : <p className="text-sm text-graphite-600">Only admins change these.</p>}
       </form>

@@ -16,7 +16,7 @@ import { RatesForm } from "@/components/price-books/rates-form";
 import { usePriceBook } from "@/components/price-books/use-price-book";
 import { api } from "@/lib/api-client";
 import { stockLengths } from "@/lib/price-book/csv";
-import { sameLength } from "@/lib/price-book/length-text";
+import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
 
 export function PriceBookView({ orgSlug, priceBookId, canWrite }: { orgSlug: string; priceBookId: string; canWrite: boolean }) {
   const { base, book, changes, controls, putItem, putBook, reload, logged } = usePriceBook(orgSlug, priceBookId, canWrite);
@@ -28,6 +28,8 @@ export function PriceBookView({ orgSlug, priceBookId, canWrite }: { orgSlug: str
   // Columns are rebuilt only when the set of lengths changes, not on every edit of a price.
   const key = [...stockLengths(items), ...extra.filter((l) => !items.some((i) => i.stock.some((s) => sameLength(s.length, l))))].sort((a, b) => a - b).join(",");
   const lengths = useMemo(() => (key ? key.split(",").map(Number) : []), [key]);
+  // Added columns live only in this page until a price is typed in them (a length is stored with its price).
+  const unsaved = extra.filter((l) => !items.some((i) => i.stock.some((s) => sameLength(s.length, l))));
 
   const remove = useMutation({
     mutationFn: () => api<void>(`${base}?version=${data?.version}`, { method: "DELETE" }),
@@ -96,6 +98,12 @@ export function PriceBookView({ orgSlug, priceBookId, canWrite }: { orgSlug: str
                     ? ` Click a value to change it; type lengths as you would write them (2 1/2, 11/16", 70 mm). Empty a price to stop selling that length. Enter saves, Esc cancels.`
                     : " Your role can read this price book; admins change it."}
                 </p>
+                {unsaved.length > 0 && (
+                  <Notice>
+                    {unsaved.map((l) => stockLengthText(l)).join(", ")} {unsaved.length === 1 ? "is a new column" : "are new columns"} with no prices yet: a column is kept only once
+                    an item has a price in it, so type at least one price before you leave or reload this page.
+                  </Notice>
+                )}
                 {canWrite && items.length > 0 && <AddLength lengths={lengths} onAdd={(l) => setExtra((e) => [...e, l])} />}
               </div>
             </ItemsContext>

@@ -75,14 +75,23 @@ export function ProjectDetail({ orgSlug, initial, canWrite }: { orgSlug: string;
             <Field label="Bid due" name="bidDue" error={fields.bidDue}>
               <TextInput name="bidDue" type="date" defaultValue={project.bidDue ?? ""} error={fields.bidDue} />
             </Field>
-            <Field label="Status" name="status" error={fields.status}>
-              <Select name="status" defaultValue={project.status}>
-                <option value="draft">Draft</option>
-                <option value="submitted">Submitted</option>
-                <option value="won">Won</option>
-                <option value="lost">Lost</option>
-              </Select>
-            </Field>
+            {project.submittedTakeoff ? (
+              <Field label="Status" name="status" error={fields.status} hint={`Bid submitted: ${project.submittedTakeoff.name}. Mark the award when it is known.`}>
+                <Select name="status" defaultValue={project.status} error={fields.status}>
+                  <option value="submitted">Submitted</option>
+                  <option value="won">Won</option>
+                  <option value="lost">Lost</option>
+                </Select>
+              </Field>
+            ) : (
+              // No select while nothing is submitted: the status follows from the takeoffs.
+              <div className="space-y-1 text-sm">
+                <p className="font-medium text-graphite-700">Status</p>
+                <p>Draft</p>
+                <p className="text-xs text-graphite-600">Becomes “Submitted” when a takeoff is submitted as the bid.</p>
+                {fields.status && <p className="text-xs font-medium text-alarm-700" role="alert">⚠ {fields.status}</p>}
+              </div>
+            )}
             <div className="flex flex-wrap gap-3 sm:col-span-2">
               <Button type="submit" disabled={save.isPending}>
                 {save.isPending ? "Saving…" : "Save changes"}

@@ -23,8 +23,9 @@ export function TakeoffsView({
   priceBooks: PriceBookChoice[];
   casings: CasingChoice[];
 }) {
+  const listKey = ["takeoffs", orgSlug, projectId] as const;
   const list = useQuery({
-    queryKey: ["takeoffs", orgSlug, projectId],
+    queryKey: listKey,
     queryFn: () => api<{ takeoffs: TakeoffListItem[] }>(takeoffsApi(orgSlug, projectId)),
   });
   const takeoffs = list.data?.takeoffs;
@@ -45,7 +46,13 @@ export function TakeoffsView({
           {canRun ? (priceBooks.length > 0 ? " Run the first one below once the window list is tagged." : "") : " Estimators and admins run them."}
         </p>
       )}
-      {takeoffs && takeoffs.length > 0 && <TakeoffList takeoffs={takeoffs} pageBase={takeoffsPage(orgSlug, projectId)} />}
+      {takeoffs && takeoffs.length > 0 && (
+        <TakeoffList
+          takeoffs={takeoffs}
+          pageBase={takeoffsPage(orgSlug, projectId)}
+          edit={canRun ? { apiBase: takeoffsApi(orgSlug, projectId), listKey } : undefined}
+        />
+      )}
       {canRun && priceBooks.length === 0 && (
         <Notice>
           Your organisation has no price book yet, and a takeoff is priced from one.{" "}

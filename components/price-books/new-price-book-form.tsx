@@ -7,6 +7,7 @@ import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
 import { Field, TextInput } from "@/components/ui/field";
 import { api, ApiError } from "@/lib/api-client";
+import { priceBooksKey } from "@/lib/client/price-books";
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
 import type { PriceBookSummary } from "@/lib/price-book/types";
 import { priceBookCreateSchema } from "@/lib/validators/price-book";
@@ -20,7 +21,7 @@ export function NewPriceBookForm({ orgSlug }: { orgSlug: string }) {
   const create = useMutation({
     mutationFn: (body: unknown) => api<{ priceBook: PriceBookSummary }>(`/api/orgs/${orgSlug}/price-books`, { method: "POST", body }),
     onSuccess: ({ priceBook }) => {
-      void queryClient.invalidateQueries({ queryKey: ["price-books", orgSlug] });
+      void queryClient.invalidateQueries({ queryKey: priceBooksKey(orgSlug) });
       router.push(`/${orgSlug}/price-books/${priceBook.id}`);
     },
     onError: (error) => setErrors(error instanceof ApiError ? error.fields : {}),

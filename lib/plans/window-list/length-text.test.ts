@@ -14,6 +14,20 @@ describe("tape", () => {
     expect(tape(inches)).toBe(text);
   });
 
+  // Regression: a 3/32" reveal read as 1/8" in the window list while the takeoff used 3/32".
+  it.each([
+    [3 / 32, `3/32"`],
+    [5 / 32, `5/32"`],
+    [15 / 64, `15/64"`],
+    [1 + 3 / 64, `1 3/64"`],
+  ])("a short length on a finer mark shows exactly: %d in → %s", (inches, text) => {
+    expect(tape(inches)).toBe(text);
+  });
+
+  it("a short length off the 1/64 grid (2.5 mm) still reads to the nearest 1/16", () => {
+    expect(tape(2.5 / 25.4)).toBe(`1/8"`);
+  });
+
   it("goes to feet-inches when rounding carries a length to two feet", () => {
     expect(tape(23.99)).toBe(`2'-0"`);
     expect(tape(23.96875)).toBe(`2'-0"`);

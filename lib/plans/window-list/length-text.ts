@@ -1,4 +1,4 @@
-import { formatLength } from "@/takeoff";
+import { formatLength, formatLengthExact } from "@/takeoff";
 import { lengthInput } from "@/lib/validators/length";
 
 /**
@@ -7,10 +7,14 @@ import { lengthInput } from "@/lib/validators/length";
  */
 export const FEET_INCHES_FROM = 24;
 
-/** A length as the tape reads it, to the nearest 1/16. */
+/**
+ * A length as the tape reads it, to the nearest 1/16 — except a short one set on a finer mark (a 3/32"
+ * reveal), which shows its exact fraction to the 1/64, so what the list shows is what the takeoff uses.
+ */
 export function tape(inches: number): string {
   // Decided on the value as shown: 23 31/32 rounds (half up) to 24", so it reads 2'-0".
   const feet = Math.abs(inches) >= FEET_INCHES_FROM - 1 / 32;
+  if (!feet && Number.isInteger(inches * 64)) return formatLengthExact(inches);
   return formatLength(inches, { style: feet ? "feet-inches" : "inches" });
 }
 

@@ -4,17 +4,13 @@ import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
 import { Card, Notice } from "@/components/ui/card";
 import { NewPriceBookForm } from "@/components/price-books/new-price-book-form";
-import { api } from "@/lib/api-client";
 import { formatMoney, percentText } from "@/lib/price-book/numbers";
-import type { PriceBookListEntry } from "@/lib/price-book/types";
+import { priceBooksQuery } from "@/lib/client/price-books";
 
 const updated = new Intl.DateTimeFormat("en-US", { dateStyle: "medium" });
 
 export function PriceBooksView({ orgSlug, canWrite }: { orgSlug: string; canWrite: boolean }) {
-  const query = useQuery({
-    queryKey: ["price-books", orgSlug],
-    queryFn: () => api<{ priceBooks: PriceBookListEntry[] }>(`/api/orgs/${orgSlug}/price-books`),
-  });
+  const query = useQuery(priceBooksQuery(orgSlug));
 
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
@@ -24,10 +20,10 @@ export function PriceBooksView({ orgSlug, canWrite }: { orgSlug: string; canWrit
         </p>
         {query.isPending && <p className="text-sm text-graphite-600">Loading price books…</p>}
         {query.isError && <Notice tone="error">{query.error.message}</Notice>}
-        {query.data && query.data.priceBooks.length === 0 && (
+        {query.data && query.data.length === 0 && (
           <p className="text-sm text-graphite-600">No price books yet.{canWrite ? " Create the first one." : ""}</p>
         )}
-        {query.data && query.data.priceBooks.length > 0 && (
+        {query.data && query.data.length > 0 && (
           <div className="overflow-x-auto">
             <table className="w-full text-sm">
               <thead className="border-b border-maple-200 text-left text-graphite-600">
@@ -41,7 +37,7 @@ export function PriceBooksView({ orgSlug, canWrite }: { orgSlug: string; canWrit
                 </tr>
               </thead>
               <tbody>
-                {query.data.priceBooks.map((b) => (
+                {query.data.map((b) => (
                   <tr key={b.id} className="border-b border-maple-100 last:border-0">
                     <td className="py-2 pr-3">
                       <Link href={`/${orgSlug}/price-books/${b.id}`} className="font-medium text-spruce-700 underline-offset-2 hover:underline">

@@ -15,6 +15,7 @@ import { NewItemForm } from "@/components/price-books/new-item-form";
 import { RatesForm } from "@/components/price-books/rates-form";
 import { usePriceBook } from "@/components/price-books/use-price-book";
 import { api } from "@/lib/api-client";
+import { priceBooksKey } from "@/lib/client/price-books";
 import { stockLengths } from "@/lib/price-book/csv";
 import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
 
@@ -34,7 +35,7 @@ export function PriceBookView({ orgSlug, priceBookId, canWrite }: { orgSlug: str
   const remove = useMutation({
     mutationFn: () => api<void>(`${base}?version=${data?.version}`, { method: "DELETE" }),
     onSuccess: () => {
-      void queryClient.invalidateQueries({ queryKey: ["price-books", orgSlug] });
+      void queryClient.invalidateQueries({ queryKey: priceBooksKey(orgSlug) });
       router.push(`/${orgSlug}/price-books`);
     },
     onError: () => reload(),

@@ -66,27 +66,23 @@ async function openFromClick(p: Page, label: string) {
  * Milliseconds during which a page layer still being drawn was on screen over the finished one (pdf.js paints a
  * new canvas white, then draws it in slices): sampled every animation frame from the key press to the new bitmap.
  */
-async function startFlashMeter(p: Page) {
-  return p.evaluate(() => {
-    const w = window as unknown as { flash_: { ms: number; stop: boolean } };
+async function startFlashMeter(p: Page): Promise<number> {
+  // A string, not a function: tsx would wrap named inner functions in a helper the page does not have.
+  return p.evaluate(`(() => {
+    const w = window;
     w.flash_ = { ms: 0, stop: false };
     let last = performance.now();
-    const tick = (now: number) => {
+    function tick(now) {
       const layers = [...document.querySelectorAll("[data-sheet-page] .react-pdf__Page")];
       if (layers.length > 1 && layers.slice(1).some((l) => getComputedStyle(l).visibility !== "hidden")) w.flash_.ms += now - last;
       last = now;
       if (!w.flash_.stop) requestAnimationFrame(tick);
-    };
+    }
     requestAnimationFrame(tick);
     return performance.now();
-  });
+  })()`);
 }
-const stopFlashMeter = (p: Page) =>
-  p.evaluate(() => {
-    const w = window as unknown as { flash_: { ms: number; stop: boolean } };
-    w.flash_.stop = true;
-    return w.flash_.ms;
-  });
+const stopFlashMeter = (p: Page): Promise<number> => p.evaluate(`(() => { window.flash_.stop = true; return window.flash_.ms; })()`);
 
 // 1. Upload-to-ready: a 50-page set, three times.
 const fifty = await generatePlanSet({ pages: 50 });

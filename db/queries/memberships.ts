@@ -13,6 +13,8 @@ export interface OrgContext {
 
 /** The caller's membership in the organisation at this slug, or null — "not a member" and "no such org" look the same. */
 export async function getOrgContext(userId: string, orgSlug: string): Promise<OrgContext | null> {
+  // Slugs come from slugify (a-z, 0-9, hyphens). Anything else names no org — and a NUL would make PostgreSQL raise.
+  if (!/^[a-z0-9-]{1,64}$/.test(orgSlug)) return null;
   const [row] = await db
     .select({
       orgId: organisations.id,

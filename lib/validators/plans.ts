@@ -1,9 +1,8 @@
 import { z } from "zod";
 import { trimSpecSchema, wallBuildUpSchema } from "@/takeoff";
-import { optionalText, text, uuid } from "./common";
+import { optionalText, text, uuid, version, versionParam } from "./common";
 import { lengthInput } from "./length";
 
-const version = z.number({ error: "Version is required: reload and try again." }).int().min(1);
 const coordinate = (label: string) =>
   z.number({ error: `${label} must be a number.` }).finite(`${label} must be a finite number.`).min(-1e6).max(1e6);
 const nonEmpty = <T extends z.ZodType>(schema: T) =>
@@ -20,7 +19,7 @@ export const unitTypeSchema = z.object({
     .min(1, "Count must be at least 1.")
     .max(100_000, "Count must be at most 100000."),
 });
-export const unitTypeUpdateSchema = nonEmpty(unitTypeSchema.partial().strict());
+export const unitTypeUpdateSchema = nonEmpty(unitTypeSchema.partial().extend({ version }).strict());
 
 export const sheetUpdateSchema = nonEmpty(
   z
@@ -107,4 +106,4 @@ export const tagUpdateSchema = nonEmpty(
 export type TagUpdateInput = z.infer<typeof tagUpdateSchema>;
 
 /** `?version=N` on a DELETE: the version the client last saw. */
-export const versionParam = z.coerce.number({ error: "Give ?version=N: reload and try again." }).int().min(1);
+export { versionParam };

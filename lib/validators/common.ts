@@ -1,9 +1,5 @@
 import { z } from "zod";
 
-// zod would probe `new Function` to compile faster parsers; the browser's CSP refuses eval (and reports the
-// probe as a violation), so every schema parses without it, on the server too.
-z.config({ jitless: true });
-
 /** Free text a person types: trimmed, no control characters, bounded. Stored and shown as text. */
 export const text = (label: string, max: number) =>
   z

@@ -3,7 +3,7 @@ import { ZodError } from "zod";
 /** Errors that carry their HTTP meaning; everything the API refuses is one of these. */
 export class AppError extends Error {
   constructor(
-    readonly status: 400 | 401 | 403 | 404 | 409 | 410 | 413 | 422 | 429 | 503,
+    readonly status: 400 | 401 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 429 | 503,
     message: string,
     readonly fields?: Record<string, string>,
     /** Extra data for the client, e.g. the current row after a stale edit. */

@@ -21,6 +21,8 @@ export async function getOrgContext(
   session: { userId: string; sessionVersion: number },
   orgSlug: string,
 ): Promise<OrgContext | null> {
+  // Slugs come from slugify (a-z, 0-9, hyphens). Anything else names no org — and a NUL would make PostgreSQL raise.
+  if (!/^[a-z0-9-]{1,64}$/.test(orgSlug)) return null;
   const [row] = await db
     .select({
       sessionVersion: users.sessionVersion,

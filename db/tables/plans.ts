@@ -38,6 +38,7 @@ export const unitTypes = pgTable(
     projectId: projectId(),
     name: text("name").notNull(),
     count: integer("count").notNull(),
+    version: version(),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("unit_types_project_name_key").on(t.projectId, t.name), check("unit_types_count_positive", sql`${t.count} >= 1`)],

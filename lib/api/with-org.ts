@@ -3,6 +3,7 @@ import { getOrgContext, type OrgContext } from "@/db/queries/memberships";
 import { sessionFromRequest } from "@/lib/auth/session";
 import { forbidden, notFound, unauthenticated } from "@/lib/errors";
 import { errorResponse } from "./error-response";
+import { refuseCrossSite } from "./same-origin";
 import { can, type Permission } from "@/lib/permissions";
 
 type Params = Record<string, string>;
@@ -18,6 +19,7 @@ export function withOrg<P extends Params & { orgSlug: string }>(
 ) {
   return async (req: NextRequest, context: RouteContext<P>): Promise<Response> => {
     try {
+      refuseCrossSite(req);
       const session = await sessionFromRequest(req);
       if (!session) throw unauthenticated();
       const params = await context.params;
@@ -35,6 +37,7 @@ export function withOrg<P extends Params & { orgSlug: string }>(
 export function publicRoute<P extends Params>(handler: (args: { req: NextRequest; params: P }) => Promise<Response>) {
   return async (req: NextRequest, context: RouteContext<P>): Promise<Response> => {
     try {
+      refuseCrossSite(req);
       return await handler({ req, params: await context.params });
     } catch (error) {
       return errorResponse(error);

@@ -7,7 +7,8 @@ export type PdfRejectReason =
   | "empty"
   | "too-large"
   | "too-many-pages"
-  | "too-slow";
+  | "too-slow"
+  | "decoded-too-large";
 
 export class PdfRejected extends Error {
   readonly reason: PdfRejectReason;
@@ -61,6 +62,13 @@ export const rejections = {
     new PdfRejected(
       "too-many-pages",
       `This PDF has ${pages} pages; the limit is ${maxPages}. Split the set into smaller files and upload each.`,
+    ),
+  /** A decompression bomb, or a file that needs more memory to read than one upload may take. */
+  decodedTooLarge: (maxStreamBytes: number, cause?: unknown) =>
+    new PdfRejected(
+      "decoded-too-large",
+      `This PDF unpacks to more than ${sizeText(maxStreamBytes)} of data in one part, far more than a plan set needs, so it was refused and nothing was kept. It may be damaged or built to overload readers; re-export it from the original program.`,
+      { cause },
     ),
   tooSlow: (seconds: number) =>
     new PdfRejected(

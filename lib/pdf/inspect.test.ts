@@ -1,5 +1,6 @@
 import { readFileSync } from "node:fs";
 import { PDFDocument, PDFName, PDFNumber, StandardFonts, degrees } from "pdf-lib";
+import { deflateSync } from "node:zlib";
 import { beforeAll, describe, expect, it } from "vitest";
 import { inspectPdf, PdfRejected, type PdfRejectReason } from "./inspect";
 
@@ -53,6 +54,16 @@ async function mixedSet(): Promise<Uint8Array> {
 
   doc.addPage([792, 612]).setRotation(degrees(-90));
   return doc.save();
+}
+
+/** One page whose content stream is `decodedBytes` of harmless operators, flate-compressed. */
+async function inflatingPdf(decodedBytes: number, dict: Record<string, string> = {}): Promise<Uint8Array> {
+  const doc = await PDFDocument.create();
+  const page = doc.addPage([612, 792]);
+  const content = deflateSync(Buffer.alloc(decodedBytes, " q Q\n"), { level: 9 });
+  const stream = doc.context.stream(content, { Filter: "FlateDecode", ...dict });
+  page.node.set(PDFName.of("Contents"), doc.context.register(stream));
+  return doc.save({ useObjectStreams: false });
 }
 
 describe("inspectPdf", () => {
@@ -134,6 +145,21 @@ describe("inspectPdf", () => {
     const error = await expectRejected(good, "too-many-pages", { maxPages: 4 });
     expect(error.message).toMatch(/5 pages; the limit is 4/);
     expect((await inspectPdf(good, { maxPages: 5 })).pageCount).toBe(5);
+  });
+
+  it("refuses a decompression bomb before pdf.js inflates it, naming the cap", async () => {
+    const bomb = await inflatingPdf(3 * 1024 * 1024);
+    expect(bomb.byteLength).toBeLessThan(64 * 1024);
+    const error = await expectRejected(bomb, "decoded-too-large", { maxDecodedStreamBytes: 1024 * 1024 });
+    expect(error.message).toMatch(/more than 1 MB/);
+    // Under the cap the same file is an ordinary one-page set.
+    expect((await inspectPdf(bomb, { maxDecodedStreamBytes: 4 * 1024 * 1024 })).pageCount).toBe(1);
+  });
+
+  it("counts content streams against the whole-file cap, but not images", async () => {
+    await expectRejected(await inflatingPdf(2 * 1024 * 1024), "decoded-too-large", { maxDecodedBytes: 1024 * 1024 });
+    const image = await inflatingPdf(2 * 1024 * 1024, { Subtype: "Image" });
+    expect((await inspectPdf(image, { maxDecodedBytes: 1024 * 1024 })).pageCount).toBe(1);
   });
 
   it("stops when the time budget is spent", async () => {

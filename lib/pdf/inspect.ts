@@ -1,10 +1,11 @@
 /**
  * Server-side check of an uploaded plan set: refuses what the viewer cannot show and reads each page's
- * size, rotation, UserUnit and sheet number. Server-only (pdf.js parses on the calling thread in Node).
+ * size, rotation, UserUnit and sheet number. Server-only. pdf.js runs in a worker thread
+ * (inspect-worker.mjs through inspect-pool.ts), so one upload never stalls the requests of everyone else.
  */
-import { rejections, PdfRejected } from "./errors";
-import { loadPdfjs, serverDocumentParams, type Pdfjs } from "./pdfjs";
-import { pickSheetLabel, type TextOnSheet } from "./sheet-label";
+import { rejections } from "./errors";
+import { runInspection, WorkerFailed, type WorkerAnswer } from "./inspect-pool";
+import { pickSheetLabel } from "./sheet-label";
 
 export { PdfRejected, isPdfRejected, type PdfRejectReason } from "./errors";
 
@@ -29,11 +30,25 @@ export interface PdfInspection {
 export interface PdfLimits {
   maxBytes?: number;
   maxPages?: number;
-  /** Wall-clock budget for the whole inspection. */
+  /** Wall-clock budget for the whole inspection; past it the worker is terminated. */
   timeoutMs?: number;
+  /** Decompression-bomb caps: bytes one stream may inflate to, and all content streams together. */
+  maxDecodedStreamBytes?: number;
+  maxDecodedBytes?: number;
 }
 
-export const DEFAULT_PDF_LIMITS = { maxBytes: 200 * 1024 * 1024, maxPages: 500, timeoutMs: 120_000 } as const;
+const MB = 1024 * 1024;
+/**
+ * 256 MB per stream passes a 24 × 36 in sheet scanned at 300 dpi in 24-bit colour (233 MB decoded); 1 GB of
+ * drawing content is far beyond any plan set we have seen (derived: ~2 MB of content per vector sheet × 500 pages).
+ */
+export const DEFAULT_PDF_LIMITS = {
+  maxBytes: 200 * MB,
+  maxPages: 500,
+  timeoutMs: 120_000,
+  maxDecodedStreamBytes: 256 * MB,
+  maxDecodedBytes: 1024 * MB,
+} as const;
 
 const HEADER = [0x25, 0x50, 0x44, 0x46, 0x2d]; // "%PDF-"
 /** Readers look for %%EOF in the last 1024 bytes (ISO 32000-1 §7.5.5 puts it on the file's last line). */
@@ -48,103 +63,53 @@ function hasEofMarker(bytes: Uint8Array): boolean {
   return tail.includes("%%EOF", 0, "latin1");
 }
 
-type PdfDocument = Awaited<ReturnType<Pdfjs["getDocument"]>["promise"]>;
-type PdfPage = Awaited<ReturnType<PdfDocument["getPage"]>>;
-
-/** Settles with `work`, or throws "too slow" once the deadline passes; checked between pages too. */
-async function withDeadline<T>(work: Promise<T>, deadline: number, timeoutMs: number): Promise<T> {
-  let timer: ReturnType<typeof setTimeout> | undefined;
-  const expired = new Promise<never>((_, reject) => {
-    timer = setTimeout(() => reject(rejections.tooSlow(Math.round(timeoutMs / 1000))), Math.max(0, deadline - Date.now()));
-  });
-  try {
-    return await Promise.race([work, expired]);
-  } finally {
-    clearTimeout(timer);
-  }
-}
-
 function normaliseRotation(rotate: number): PdfPageInfo["rotation"] {
   const r = (((Math.round(rotate / 90) * 90) % 360) + 360) % 360;
   return r as PdfPageInfo["rotation"];
 }
 
-/** Text items with their position as displayed (after /Rotate), for the title-block heuristic. */
-async function textOnSheet(page: PdfPage): Promise<TextOnSheet[]> {
-  const viewport = page.getViewport({ scale: 1 });
-  const content = await page.getTextContent();
-  const items: TextOnSheet[] = [];
-  for (const item of content.items) {
-    if (!("str" in item) || item.str.trim() === "") continue;
-    const [a = 0, b = 0, c = 0, d = 0, e = 0, f = 0] = item.transform as number[];
-    const [vx = 0, vy = 0] = viewport.convertToViewportPoint(e, f);
-    items.push({
-      text: item.str,
-      size: Math.max(Math.hypot(a, b), Math.hypot(c, d)),
-      x: vx / viewport.width,
-      y: vy / viewport.height,
-    });
+function refusal(answer: Exclude<WorkerAnswer, { ok: true }>, bytes: Uint8Array, limits: Required<PdfLimits>) {
+  switch (answer.reason) {
+    case "decoded-too-large":
+      return rejections.decodedTooLarge(limits.maxDecodedStreamBytes);
+    case "empty":
+      return rejections.empty();
+    case "too-many-pages":
+      return rejections.tooManyPages(answer.pages, limits.maxPages);
+    case "too-slow":
+      return rejections.tooSlow(Math.round(limits.timeoutMs / 1000));
+    case "encrypted":
+      return rejections.encrypted();
+    case "unreadable":
+      return hasEofMarker(bytes) ? rejections.damaged() : rejections.truncated();
   }
-  return items;
-}
-
-function parseFailure(error: unknown, bytes: Uint8Array): PdfRejected {
-  if (error instanceof PdfRejected) return error;
-  const name = (error as { name?: unknown } | null)?.name;
-  if (name === "PasswordException") return rejections.encrypted(error);
-  return hasEofMarker(bytes) ? rejections.damaged(error) : rejections.truncated(error);
 }
 
 /**
  * Throws PdfRejected for files the product refuses. A PDF that is encrypted only to restrict printing or
  * editing (an owner password, empty user password) opens without a password, so it is accepted.
  */
-export async function inspectPdf(bytes: Uint8Array, limits: PdfLimits = {}): Promise<PdfInspection> {
-  const maxBytes = limits.maxBytes ?? DEFAULT_PDF_LIMITS.maxBytes;
-  const maxPages = limits.maxPages ?? DEFAULT_PDF_LIMITS.maxPages;
-  const timeoutMs = limits.timeoutMs ?? DEFAULT_PDF_LIMITS.timeoutMs;
-  if (bytes.byteLength > maxBytes) throw rejections.tooLarge(bytes.byteLength, maxBytes);
+export async function inspectPdf(bytes: Uint8Array, options: PdfLimits = {}): Promise<PdfInspection> {
+  const limits: Required<PdfLimits> = { ...DEFAULT_PDF_LIMITS, ...options };
+  if (bytes.byteLength > limits.maxBytes) throw rejections.tooLarge(bytes.byteLength, limits.maxBytes);
   if (!startsWithHeader(bytes)) throw rejections.notPdf();
 
-  const deadline = Date.now() + timeoutMs;
-  const pdfjs = await loadPdfjs();
-  const task = pdfjs.getDocument(serverDocumentParams(bytes));
-  let doc: PdfDocument | null = null;
+  let answer: WorkerAnswer;
   try {
-    doc = await withDeadline(task.promise, deadline, timeoutMs).catch((error: unknown) => {
-      throw parseFailure(error, bytes);
-    });
-    const pageCount = doc.numPages;
-    if (pageCount === 0) throw rejections.empty();
-    if (pageCount > maxPages) throw rejections.tooManyPages(pageCount, maxPages);
-
-    const pages: PdfPageInfo[] = [];
-    for (let pageNumber = 1; pageNumber <= pageCount; pageNumber++) {
-      const page = await withDeadline(doc.getPage(pageNumber), deadline, timeoutMs).catch((error: unknown) => {
-        throw parseFailure(error, bytes);
-      });
-      // A page whose text can't be read still shows; it just gets no label.
-      const text = await withDeadline(textOnSheet(page), deadline, timeoutMs).catch((error: unknown) => {
-        if (error instanceof PdfRejected) throw error;
-        return [];
-      });
-      const [x0 = 0, y0 = 0, x1 = 0, y1 = 0] = page.view;
-      pages.push({
-        pageNumber,
-        width: x1 - x0,
-        height: y1 - y0,
-        rotation: normaliseRotation(page.rotate),
-        userUnit: page.userUnit > 0 ? page.userUnit : 1,
-        label: pickSheetLabel(text),
-      });
-      page.cleanup();
-      // pdf.js runs on this thread: yield so other requests (and the deadline timer) get a turn.
-      await new Promise((resolve) => setImmediate(resolve));
-      if (Date.now() >= deadline) throw rejections.tooSlow(Math.round(timeoutMs / 1000));
-    }
-    return { pageCount, pages };
-  } finally {
-    // Destroying the task also destroys its document and frees pdf.js's copy of the bytes.
-    await task.destroy().catch(() => undefined);
+    answer = await runInspection(bytes, limits);
+  } catch (error) {
+    if (error instanceof WorkerFailed && error.kind === "deadline") throw rejections.tooSlow(Math.round(limits.timeoutMs / 1000));
+    if (error instanceof WorkerFailed && error.kind === "memory") throw rejections.decodedTooLarge(limits.maxDecodedStreamBytes, error);
+    throw error;
   }
+  if (!answer.ok) throw refusal(answer, bytes, limits);
+  return {
+    pageCount: answer.pageCount,
+    pages: answer.pages.map(({ text, ...page }) => ({
+      ...page,
+      rotation: normaliseRotation(page.rotation),
+      userUnit: page.userUnit > 0 ? page.userUnit : 1,
+      label: pickSheetLabel(text),
+    })),
+  };
 }

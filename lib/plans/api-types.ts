@@ -9,6 +9,8 @@ export interface UnitTypeView {
   name: string;
   /** How many of this layout the job has. */
   count: number;
+  /** Sent back with an edit or delete; a stale one is refused with the row as it is now. */
+  version: number;
 }
 
 export interface PlanSetView {

@@ -1,6 +1,7 @@
 import { formatLengthExact, parseLength } from "@/takeoff";
 import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
-import { formatCsv, parseCsv } from "./csv-grammar";
+import { writeCsv } from "@/lib/csv/write";
+import { parseCsv } from "./csv-grammar";
 import { hasReplacementCharacter, SAVE_AS_UTF8 } from "./csv-encoding";
 import { MATERIAL_KINDS, readKind } from "./kinds";
 import { sameLength, sizeText, stockLengthText } from "./length-text";
@@ -21,10 +22,9 @@ export const MAX_IMPORT_ROWS = 2000;
 const PRICE_COLUMN = /^price[\s_]*(.+)$/i;
 
 /**
- * A value a spreadsheet would run as a formula (=, +, -, @) is written behind an apostrophe, which
- * spreadsheets hide; the import takes it off again, so the round trip is exact.
+ * The writer (lib/csv/write.ts) puts a value a spreadsheet would run as a formula (=, +, -, @) behind an
+ * apostrophe, which spreadsheets hide; the import takes it off again, so the round trip is exact.
  */
-const guard = (v: string) => (/^[=+\-@\t\r]/.test(v) ? `'${v}` : v);
 const unguard = (v: string) => (/^'[=+\-@\t\r]/.test(v) ? v.slice(1) : v);
 
 const KIND_ORDER = new Map(MATERIAL_KINDS.map((k, i) => [k, i]));
@@ -45,18 +45,18 @@ export function itemsToCsv(items: readonly ItemFields[]): string {
   const lengths = stockLengths(items);
   const header = [...BASE_COLUMNS, ...lengths.map(priceColumn)];
   const rows = [...items].sort(byKindThenName).map((i) => [
-    guard(i.name),
+    i.name,
     i.kind,
     sizeText(i.faceWidth),
     sizeText(i.thickness),
-    guard(i.species ?? ""),
-    guard(i.supplierCode ?? ""),
+    i.species ?? "",
+    i.supplierCode ?? "",
     ...lengths.map((l) => {
       const s = i.stock.find((x) => sameLength(x.length, l));
       return s ? moneyText(s.price) : "";
     }),
   ]);
-  return "\uFEFF" + formatCsv([header, ...rows]);
+  return writeCsv([header, ...rows], { bom: true });
 }
 
 export interface CsvItemRow {

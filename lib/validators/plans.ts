@@ -1,9 +1,8 @@
 import { z } from "zod";
 import { trimSpecSchema, wallBuildUpSchema } from "@/takeoff";
-import { optionalText, text, uuid } from "./common";
+import { optionalText, text, uuid, version, versionParam } from "./common";
 import { lengthInput } from "./length";
 
-const version = z.number({ error: "Version is required: reload and try again." }).int().min(1);
 const coordinate = (label: string) =>
   z.number({ error: `${label} must be a number.` }).finite(`${label} must be a finite number.`).min(-1e6).max(1e6);
 const nonEmpty = <T extends z.ZodType>(schema: T) =>
@@ -20,7 +19,7 @@ export const unitTypeSchema = z.object({
     .min(1, "Count must be at least 1.")
     .max(100_000, "Count must be at most 100000."),
 });
-export const unitTypeUpdateSchema = nonEmpty(unitTypeSchema.partial().strict());
+export const unitTypeUpdateSchema = nonEmpty(unitTypeSchema.partial().extend({ version }).strict());
 
 export const sheetUpdateSchema = nonEmpty(
   z
@@ -108,7 +107,7 @@ export const tagUpdateSchema = nonEmpty(
 export type TagUpdateInput = z.infer<typeof tagUpdateSchema>;
 
 /** `?version=N` on a DELETE: the version the client last saw. */
-export const versionParam = z.coerce.number({ error: "Give ?version=N: reload and try again." }).int().min(1);
+export { versionParam };
 
 /** `?tags=N` on a DELETE that takes tags with it: how many the person agreed to remove. */
 export const confirmTagsParam = z.coerce.number({ error: "Give ?tags=N: the number of tags you agreed to delete." }).int().min(0).max(10_000_000);

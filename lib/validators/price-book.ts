@@ -2,7 +2,7 @@ import { z } from "zod";
 import { MATERIAL_KINDS } from "@/lib/price-book/kinds";
 import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
 import { readDecimal } from "@/lib/price-book/numbers";
-import { optionalText, text } from "./common";
+import { optionalText, text, version } from "./common";
 import { lengthInput } from "./length";
 
 /**
@@ -10,7 +10,6 @@ import { lengthInput } from "./length";
  * fractions here (0.15 is 15 %); the forms show and take percentages and convert at the edge.
  */
 
-const version = z.number({ error: "Version is required: reload and try again." }).int().min(1);
 const nonEmpty = <T extends z.ZodType>(schema: T) =>
   schema.refine((v) => Object.keys(v as object).filter((k) => k !== "version").length > 0, {
     message: "Nothing to change.",

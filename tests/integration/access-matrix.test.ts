@@ -74,8 +74,8 @@ const writers: Role[] = ["admin", "estimator"];
 routes.push(
   { name: "list unit types", handler: unitTypesRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
   { name: "add a unit type", handler: unitTypesRoute.POST, method: "POST", params: proj, body: () => ({ name: `Type B ${unique()}`, count: 4 }), allowed: writers, okStatus: 201 },
-  { name: "edit a unit type", handler: unitTypeRoute.PATCH, method: "PATCH", params: (w) => ({ ...proj(w), unitTypeId: w.plans.unitType.id }), body: () => ({ count: 30 }), allowed: writers, okStatus: 200 },
-  { name: "delete a unit type", handler: unitTypeRoute.DELETE, method: "DELETE", params: (w) => ({ ...proj(w), unitTypeId: w.plans.unitType.id }), allowed: writers, okStatus: 204 },
+  { name: "edit a unit type", handler: unitTypeRoute.PATCH, method: "PATCH", params: (w) => ({ ...proj(w), unitTypeId: w.plans.unitType.id }), body: () => ({ version: 1, count: 30 }), allowed: writers, okStatus: 200 },
+  { name: "delete a unit type", handler: unitTypeRoute.DELETE, method: "DELETE", path: "/api/x?version=1", params: (w) => ({ ...proj(w), unitTypeId: w.plans.unitType.id }), allowed: writers, okStatus: 204 },
   { name: "list sheets", handler: sheetsRoute.GET, method: "GET", params: proj, allowed: readers, okStatus: 200 },
   { name: "read a sheet", handler: sheetRoute.GET, method: "GET", params: (w) => ({ ...proj(w), sheetId: w.plans.sheet.id }), allowed: readers, okStatus: 200 },
   { name: "calibrate a sheet", handler: sheetRoute.PATCH, method: "PATCH", params: (w) => ({ ...proj(w), sheetId: w.plans.sheet.id }), body: () => ({ version: 1, scale: { ratio: 48, label: '1/4" = 1\'-0"' } }), allowed: writers, okStatus: 200 },

@@ -4,6 +4,9 @@ import { Document } from "react-pdf";
 import type { PDFDocumentProxy } from "pdfjs-dist";
 import { planSetFileUrl } from "@/components/plans/pdf-setup";
 
+// Without it pdf.js probes `new Function` for PostScript functions, which the CSP refuses (and reports).
+const OPTIONS = { isEvalSupported: false };
+
 /**
  * Loads a plan set's PDF for its thumbnails (loaded with next/dynamic, never on the server). It draws no
  * page itself: the pages render beside each sheet's row from the document it hands back.
@@ -24,6 +27,7 @@ export default function PdfDocument({
   return (
     <Document
       file={planSetFileUrl(orgSlug, projectId, planSetId)}
+      options={OPTIONS}
       onLoadSuccess={onLoad}
       onLoadError={onFail}
       onSourceError={onFail}

@@ -5,7 +5,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
 import type { UnitTypeView } from "@/lib/plans/api-types";
-import { plansApi } from "@/lib/plans/window-list/request";
+import { PlansApiError, plansApi } from "@/lib/plans/window-list/request";
 import { UnitTypeForm } from "./unit-type-form";
 
 /** The job's repeated layouts and how many of each it has. */
@@ -21,9 +21,15 @@ export function UnitTypesEditor({
   onChanged: () => void;
 }) {
   const [editing, setEditing] = useState<string | null>(null);
-  const save = (path: string, method: "POST" | "PATCH", body: unknown) => plansApi(`${base}/unit-types${path}`, { method, body }).then(onChanged);
+  // Someone else saved first (409): reload the list so the next try starts from their version.
+  const reloadIfStale = (error: unknown): never => {
+    if (error instanceof PlansApiError && error.status === 409) onChanged();
+    throw error;
+  };
+  const save = (path: string, method: "POST" | "PATCH", body: unknown) =>
+    plansApi(`${base}/unit-types${path}`, { method, body }).then(onChanged, reloadIfStale);
   const remove = useMutation({
-    mutationFn: (u: UnitTypeView) => plansApi<void>(`${base}/unit-types/${u.id}`, { method: "DELETE" }),
+    mutationFn: (u: UnitTypeView) => plansApi<void>(`${base}/unit-types/${u.id}?version=${u.version}`, { method: "DELETE" }).catch(reloadIfStale),
     onSuccess: onChanged,
   });
 
@@ -42,7 +48,7 @@ export function UnitTypesEditor({
                 idPrefix={`unit-${u.id}`}
                 initial={{ name: u.name, count: String(u.count) }}
                 submitLabel="Save"
-                onSubmit={(v) => save(`/${u.id}`, "PATCH", v).then(() => setEditing(null))}
+                onSubmit={(v) => save(`/${u.id}`, "PATCH", { ...v, version: u.version }).then(() => setEditing(null))}
                 onCancel={() => setEditing(null)}
               />
               {/* Delete sits with the edit form: kept off the list, it is one deliberate step away. */}

@@ -1,9 +1,9 @@
-// PATCH /api/orgs/[orgSlug]/projects/[projectId]/unit-types/[unitTypeId] — rename or recount; DELETE — remove
+// PATCH /api/orgs/[orgSlug]/projects/[projectId]/unit-types/[unitTypeId] — rename or recount; DELETE ?version=N — remove
 import { NextResponse } from "next/server";
 import { deleteUnitType, updateUnitType } from "@/db/queries/unit-types";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
-import { parseId, readJson } from "@/lib/api/read-input";
+import { parseId, readJson, readVersion } from "@/lib/api/read-input";
 import { unitTypeUpdateSchema } from "@/lib/validators/plans";
 
 type Params = { orgSlug: string; projectId: string; unitTypeId: string };
@@ -18,8 +18,8 @@ export const PATCH = withOrg<Params>(
 );
 
 export const DELETE = withOrg<Params>(
-  async ({ params, org }) => {
-    await deleteUnitType(projectScope(org, params), parseId(params.unitTypeId, "unit type"));
+  async ({ req, params, org }) => {
+    await deleteUnitType(projectScope(org, params), parseId(params.unitTypeId, "unit type"), readVersion(req));
     return new NextResponse(null, { status: 204 });
   },
   { permission: "plans.write" },

@@ -1,0 +1,1 @@
+ALTER TABLE "unit_types" ADD COLUMN "version" integer DEFAULT 1 NOT NULL;

@@ -1,0 +1,20 @@
+import { expect, it } from "vitest";
+import { parseCsv } from "@/lib/price-book/csv-grammar";
+import { computeTakeoff } from "./compute";
+import { testInputs, testPrices } from "./fixtures";
+import { orderCsv } from "./order-csv";
+
+it("writes item names and supplier codes a spreadsheet would run as formulas behind an apostrophe", async () => {
+  const prices = testPrices();
+  prices.items = prices.items.map((item) =>
+    item.id === "casing-25" ? { ...item, name: '=HYPERLINK("http://attacker.test","Casing")', supplierCode: "@SUM(1+1)" } : item,
+  );
+  const parsed = parseCsv(orderCsv(await computeTakeoff(testInputs(), prices)));
+  if (!parsed.ok) throw new Error(parsed.message);
+  const rows = parsed.records.slice(1).map((r) => r.fields);
+  const casing = rows.find((r) => r[1]?.includes("HYPERLINK"));
+  expect(casing?.[1]).toBe(`'=HYPERLINK("http://attacker.test","Casing")`);
+  expect(casing?.[2]).toBe("'@SUM(1+1)");
+  // No cell of the file starts a formula.
+  for (const cell of rows.flat()) expect(cell, cell).not.toMatch(/^[=+\-@\t\r]/);
+});

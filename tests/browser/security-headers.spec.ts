@@ -73,10 +73,8 @@ test("the app, the upload and the pdf.js viewer run under the CSP with no violat
   });
 
   await test.step("render a sheet in the viewer", async () => {
-    // Opened by its address: following the link client-side ends in "This page couldn't load" on this build
-    // with no CSP violation or console error (reported to the viewer's owner); the policy is what is under test.
-    const href = await page.getByRole("link", { name: /A-201/ }).first().getAttribute("href");
-    await page.goto(href!);
+    // By clicking its link on the Plans page, as a person does (client-side navigation runs under the policy too).
+    await page.getByRole("main").getByRole("link", { name: /A-201/ }).first().click();
     await expect(page.locator("[data-sheet-page] canvas").first(), problems.join("\n")).toBeVisible({ timeout: 60_000 });
     // Let the worker finish the page (text layer, detail tiles) so late violations show too.
     await page.waitForTimeout(2000);

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { csvField, formatCsv, parseCsv } from "./csv-grammar";
+import { guardFormula, writeCsv } from "@/lib/csv/write";
+import { parseCsv } from "./csv-grammar";
 
 const records = (text: string) => {
   const r = parseCsv(text);
@@ -46,15 +47,16 @@ describe("writing CSV", () => {
     ["two\nlines", `"two\nlines"`],
     [" padded", `" padded"`],
   ])("quotes %j only when it must", (value, written) => {
-    expect(csvField(value)).toBe(written);
+    expect(writeCsv([[value]])).toBe(`${written}\r\n`);
   });
 
   it("reads back exactly what it wrote, whatever the values", () => {
     const cell = fc.string({ unit: fc.constantFrom("a", " ", ",", '"', "\n", "\r", "é", "'", "x") });
     fc.assert(
       fc.property(fc.array(fc.array(cell, { minLength: 2, maxLength: 5 }), { minLength: 1, maxLength: 6 }), (rows) => {
-        const r = parseCsv(formatCsv(rows));
-        expect(r.ok && r.records.map((x) => x.fields)).toEqual(rows);
+        // The one writer guards formula starts (here a leading CR) behind an apostrophe; all else is exact.
+        const r = parseCsv(writeCsv(rows));
+        expect(r.ok && r.records.map((x) => x.fields)).toEqual(rows.map((row) => row.map(guardFormula)));
       }),
     );
   });

@@ -79,13 +79,4 @@ export function parseCsv(input: string, delimiter: "," | "\t" = ","): CsvParse {
   return { ok: true, records };
 }
 
-const NEEDS_QUOTES = /[",\r\n]|^\s|\s$/;
-
-export function csvField(value: string): string {
-  return NEEDS_QUOTES.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
-}
-
-/** Records joined with CRLF, the line ending RFC 4180 names and every spreadsheet reads. */
-export function formatCsv(rows: readonly (readonly string[])[]): string {
-  return rows.map((r) => r.map(csvField).join(",")).join("\r\n") + "\r\n";
-}
+// Writing lives in lib/csv/write.ts: one writer, with the spreadsheet-formula guard, for every export.

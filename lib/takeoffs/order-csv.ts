@@ -1,5 +1,5 @@
 import { formatLength } from "@/takeoff";
-import { formatCsv } from "@/lib/price-book/csv-grammar";
+import { writeCsv } from "@/lib/csv/write";
 import type { TakeoffResult } from "./types";
 
 const money = (x: number) => x.toFixed(2);
@@ -27,5 +27,5 @@ export function orderCsv(result: TakeoffResult): string {
       ]);
     }
   }
-  return formatCsv(rows);
+  return writeCsv(rows);
 }

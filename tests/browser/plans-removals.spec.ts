@@ -5,7 +5,7 @@
  * the same file twice asks first.
  */
 import { expect, test, type Page } from "@playwright/test";
-import { db, pool } from "@/db/client";
+import { db } from "@/db/client";
 import { memberships, users } from "@/db/schema";
 import { createOpeningType } from "@/db/queries/opening-types";
 import { createPlanSet } from "@/db/queries/plan-sets";
@@ -48,7 +48,7 @@ async function seed() {
     for (const [ot, x, y] of [[w1.id, 400, 300], [w1.id, 520, 300], [w2.id, 900, 700], [m.id, 1200, 300]] as const) await createTag(scope, { sheetId: sheet.id, openingTypeId: ot, x, y });
   }
   await seedDemoPriceBook(organisation.id, admin.id);
-  await pool.end();
+  // The pool stays open: later spec files in this worker seed through it too.
   return { email: estimator!.email, projectName };
 }
 

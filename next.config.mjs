@@ -6,7 +6,7 @@ const nextConfig = {
   // The PDF inspection worker is loaded from disk at run time (lib/pdf/inspect-pool.ts), which file tracing
   // cannot see; keep it, and the pdf.js build it imports, in any traced deployment (output: "standalone").
   outputFileTracingIncludes: {
-    "/api/**": ["./lib/pdf/inspect-worker.mjs", "./node_modules/pdfjs-dist/legacy/build/**", "./node_modules/tinypool/dist/**"],
+    "/api/**": ["./lib/pdf/inspect-worker.mjs", "./lib/pdf/pdfjs-node.mjs", "./node_modules/pdfjs-dist/legacy/build/**", "./node_modules/tinypool/dist/**"],
   },
   poweredByHeader: false,
   // Tests build into their own folder so a running demo keeps its build.

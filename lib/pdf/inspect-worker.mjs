@@ -6,6 +6,7 @@
  * transpiled. It answers facts and reason codes; the wording of a refusal lives in lib/pdf/errors.ts.
  */
 import { createInflate, constants as zlib } from "node:zlib";
+import { loadPdfjs, untrustedDocumentParams } from "./pdfjs-node.mjs";
 
 /**
  * @typedef {{ maxPages: number, maxDecodedStreamBytes: number, maxDecodedBytes: number, deadline: number }} Limits
@@ -93,20 +94,6 @@ function inflatedSize(data, cap) {
   });
 }
 
-/** @type {Promise<typeof import("pdfjs-dist/legacy/build/pdf.mjs")> | null} */
-let loading = null;
-
-/** pdf.js for Node, with its worker module handed over so it runs in this thread ("fake worker"). */
-function loadPdfjs() {
-  loading ??= Promise.all([import("pdfjs-dist/legacy/build/pdf.mjs"), import("pdfjs-dist/legacy/build/pdf.worker.mjs")]).then(
-    ([pdfjs, worker]) => {
-      /** @type {{ pdfjsWorker?: unknown }} */ (globalThis).pdfjsWorker ??= worker;
-      return pdfjs;
-    },
-  );
-  return loading;
-}
-
 /** Only text that could hold a sheet number (a capital and a digit) travels back to the caller. */
 const mayBeSheetNumber = (/** @type {string} */ s) => /[A-Z]/.test(s) && /\d/.test(s);
 
@@ -120,16 +107,7 @@ export default async function inspect({ bytes, limits }) {
   if (measured.over) return { ok: false, reason: "decoded-too-large", decodedBytes: measured.decodedBytes };
 
   const pdfjs = await loadPdfjs();
-  const task = pdfjs.getDocument({
-    data: bytes,
-    isEvalSupported: false,
-    disableFontFace: true,
-    useSystemFonts: false,
-    disableAutoFetch: true,
-    disableStream: true,
-    stopAtErrors: false,
-    verbosity: 0,
-  });
+  const task = pdfjs.getDocument(untrustedDocumentParams(bytes));
   try {
     let doc;
     try {

@@ -1,44 +1,13 @@
 /**
- * Loads pdf.js for Node (server-only: the browser viewer loads its own copy with a real worker).
- * Node has no Web Workers, so pdf.js parses on the calling thread through its "fake worker". We hand it the
- * worker module ourselves instead of letting it `import("./pdf.worker.mjs")` relative to its own file,
- * which breaks once a bundler has moved pdf.js into a server chunk.
+ * pdf.js for Node in TypeScript callers (server-side tests and fixtures read generated sheets with it). The
+ * loader and the options for untrusted files live once, in pdfjs-node.mjs, which the upload-inspection
+ * worker imports too; the browser viewer loads its own copy with a real worker.
  */
 import type * as PdfjsModule from "pdfjs-dist/legacy/build/pdf.mjs";
+import { loadPdfjs, untrustedDocumentParams } from "./pdfjs-node.mjs";
 
 export type Pdfjs = typeof PdfjsModule;
+export { loadPdfjs };
 
-let loading: Promise<Pdfjs> | null = null;
-
-export function loadPdfjs(): Promise<Pdfjs> {
-  loading ??= (async () => {
-    const [pdfjs, worker] = await Promise.all([
-      import("pdfjs-dist/legacy/build/pdf.mjs"),
-      import("pdfjs-dist/legacy/build/pdf.worker.mjs"),
-    ]);
-    const g = globalThis as { pdfjsWorker?: unknown };
-    g.pdfjsWorker ??= worker;
-    return pdfjs;
-  })();
-  loading.catch(() => {
-    loading = null;
-  });
-  return loading;
-}
-
-/**
- * Options for parsing untrusted uploads on the server: no eval of font programs, no font-face or system
- * fonts, no network, quiet logging. The bytes are copied because pdf.js transfers (detaches) the buffer.
- */
-export function serverDocumentParams(bytes: Uint8Array) {
-  return {
-    data: bytes.slice(),
-    isEvalSupported: false,
-    disableFontFace: true,
-    useSystemFonts: false,
-    disableAutoFetch: true,
-    disableStream: true,
-    stopAtErrors: false,
-    verbosity: 0,
-  };
-}
+/** The untrusted-file options, on a copy of the bytes, because pdf.js detaches the buffer it is given. */
+export const serverDocumentParams = (bytes: Uint8Array) => untrustedDocumentParams(bytes.slice());

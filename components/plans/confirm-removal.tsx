@@ -1,7 +1,8 @@
 "use client";
 
-import { useEffect, useRef, type ReactNode } from "react";
+import type { ReactNode } from "react";
 import { Button } from "@/components/ui/button";
+import { useModalDialog } from "@/components/ui/use-modal-dialog";
 
 /**
  * A modal question before a delete that takes counted work with it. It says what goes (tags, openings)
@@ -26,13 +27,7 @@ export function ConfirmRemoval({
   onConfirm: () => void;
   onCancel: () => void;
 }) {
-  const ref = useRef<HTMLDialogElement>(null);
-  useEffect(() => {
-    const d = ref.current;
-    if (!d) return;
-    if (open && !d.open) d.showModal();
-    if (!open && d.open) d.close();
-  }, [open]);
+  const ref = useModalDialog(open);
 
   return (
     <dialog

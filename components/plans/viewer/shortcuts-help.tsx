@@ -1,18 +1,12 @@
 "use client";
 
-import { useEffect, useRef } from "react";
+import { useModalDialog } from "@/components/ui/use-modal-dialog";
 import { Kbd } from "./kbd";
 import { SHORTCUTS } from "./tools";
 
 /** The shortcut list as a modal dialog (the native <dialog> keeps focus inside and closes on Esc). */
 export function ShortcutsHelp({ open, onClose, canWrite }: { open: boolean; onClose: () => void; canWrite: boolean }) {
-  const ref = useRef<HTMLDialogElement>(null);
-  useEffect(() => {
-    const d = ref.current;
-    if (!d) return;
-    if (open && !d.open) d.showModal();
-    if (!open && d.open) d.close();
-  }, [open]);
+  const ref = useModalDialog(open);
   return (
     <dialog ref={ref} onClose={onClose} aria-labelledby="viewer-keys-title" className="m-auto w-[28rem] max-w-[95vw] rounded-lg border border-maple-300 bg-white p-4 shadow-xl backdrop:bg-graphite-900/40">
       <div className="mb-3 flex items-center justify-between">

@@ -33,7 +33,7 @@ function refused(preview: ImportPreview): AppError {
   }
   const bad = preview.counts.error;
   const message = preview.fileErrors.length > 0 ? "The file cannot be read; nothing was imported." : `${bad} row${bad === 1 ? "" : "s"} need${bad === 1 ? "s" : ""} attention; nothing was imported.`;
-  return new AppError(422, message, fields, { preview });
+  return new AppError(422, message, fields, { preview }, "import_refused");
 }
 
 /** What importing this CSV would do; nothing is written. */
@@ -55,7 +55,7 @@ export async function applyPriceBookImport(w: PriceBookWriter, input: ImportRequ
     const preview = { ...planImport(items, readItemsCsv(input.csv), input.mode), previewToken: tokenOf(items) };
     if (!preview.ok) throw refused(preview);
     if (input.previewToken && input.previewToken !== preview.previewToken) {
-      throw new AppError(409, "The price book changed since your preview. Check the new preview, then apply again.", undefined, { preview });
+      throw new AppError(409, "The price book changed since your preview. Check the new preview, then apply again.", undefined, { preview }, "preview_changed");
     }
     const byId = new Map(items.map((i) => [i.id, i]));
     const log: ChangeEntry[] = [];

@@ -14,5 +14,5 @@ export function requireConfirmed(what: string, impact: RemovalImpact, confirmedT
     confirmedTags === undefined
       ? `${lead ?? `Deleting ${what} removes ${describeImpact(impact)}.`} Confirm to delete them with it.`
       : `${what} now carries ${describeImpact(impact)}, not ${plural(confirmedTags, "tag")} as you were shown. Check and confirm again.`;
-  throw new AppError(409, message, undefined, { code: "confirm_removal", removes: impact });
+  throw new AppError(409, message, undefined, { removes: impact }, "confirm_removal");
 }

@@ -10,7 +10,7 @@ import type { ProjectScope } from "./project-scope";
 const scoped = (s: ProjectScope, id: string) =>
   and(eq(takeoffs.orgId, s.orgId), eq(takeoffs.projectId, s.projectId), eq(takeoffs.id, id));
 
-const locked = () => conflict("This takeoff was submitted as the bid and is locked. Make a copy to continue working on it.");
+const locked = () => conflict("This takeoff was submitted as the bid and is locked. Make a copy to continue working on it.", undefined, "locked");
 
 /** Rename or re-note a draft. A submitted takeoff refuses every edit, whoever asks. */
 export async function updateTakeoff(s: ProjectScope, id: string, input: { name?: string; note?: string | null }) {
@@ -34,7 +34,7 @@ export async function deleteTakeoff(s: ProjectScope, id: string) {
 
 const ONE_SUBMITTED = "takeoffs_one_submitted_per_project";
 const alreadyBid = (name: string) =>
-  conflict(`"${name}" is already this project's submitted bid; a project has one. Make a copy of it to revise the bid.`);
+  conflict(`"${name}" is already this project's submitted bid; a project has one. Make a copy of it to revise the bid.`, undefined, "already_submitted");
 
 /**
  * Marks the takeoff as the submitted bid: it is locked from then on, and the project's status says
@@ -51,7 +51,8 @@ export async function submitTakeoff(s: ProjectScope & { userId: string }, id: st
       409,
       `This takeoff prices ${placeholders.length} item${placeholders.length === 1 ? "" : "s"} with a placeholder (${placeholders.map((p) => `${p.itemName.replace(/^PLACEHOLDER /, "")} for ${p.marks.join(", ")}`).join("; ")}). Add ${placeholders.length === 1 ? "it" : "them"} to the price book and run the takeoff again before submitting it.`,
       undefined,
-      { code: "placeholder_prices" },
+      undefined,
+      "placeholder_prices",
     );
   }
   try {

@@ -69,7 +69,7 @@ export async function runTakeoff(s: ProjectScope & { userId: string }, input: Ru
     // A window that cannot be cut, or a size the price book does not carry, is the estimator's to fix, not a server fault.
     if (error instanceof OpeningTypeProblem) throw invalid({ [`openingTypes.${error.mark}.${error.field}`]: error.message }, error.message);
     if (error instanceof PriceGaps) {
-      throw new AppError(422, error.message, { priceBookId: error.message }, { code: "price_gaps", gaps: error.gaps.map(({ mark, material, kind, message, fix }) => ({ mark, material, kind, message, fix })) });
+      throw new AppError(422, error.message, { priceBookId: error.message }, { gaps: error.gaps.map(({ mark, material, kind, message, fix }) => ({ mark, material, kind, message, fix })) }, "price_gaps");
     }
     if (error instanceof MissingItem) throw invalid({ priceBookId: error.message }, error.message);
     throw error;

@@ -18,7 +18,7 @@ export function refuseCrossSite(req: Request): void {
   if (origin !== null && !allowedOrigins(req).has(origin)) throw crossSite();
 }
 
-const crossSite = () => new AppError(403, "This request came from another site, so it was refused. Use Miterwise from its own address.");
+const crossSite = () => new AppError(403, "This request came from another site, so it was refused. Use Miterwise from its own address.", undefined, undefined, "cross_site");
 
 /** The app's public address, and the address this request was sent to (a load balancer may add its own). */
 function allowedOrigins(req: Request): Set<string> {

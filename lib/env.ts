@@ -2,6 +2,7 @@ import { randomBytes } from "node:crypto";
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { z } from "zod";
+import { DEFAULT_DATABASE_URL } from "@/db/config";
 
 /**
  * Every setting the server reads, validated once at start-up. Defaults point at the local stand-ins
@@ -10,7 +11,7 @@ import { z } from "zod";
  */
 const schema = z.object({
   NODE_ENV: z.string().optional(),
-  DATABASE_URL: z.string().url().default("postgres://miterwise@127.0.0.1:54329/miterwise"),
+  DATABASE_URL: z.string().url().default(DEFAULT_DATABASE_URL),
   NEXTAUTH_URL: z.string().url().default("http://127.0.0.1:3000"),
   // Signs every session cookie. Required in production; see `secretOrLocal` for the demo and tests.
   NEXTAUTH_SECRET: z.string().min(32, "must be at least 32 characters (e.g. `openssl rand -base64 32`)").optional(),

@@ -85,6 +85,14 @@ export function orNotFound<T>(row: T | null | undefined, what: string): T {
   return row;
 }
 
+/**
+ * After a version-checked write matched no row: the row as it is now means someone saved first (409 with
+ * `current`); no row at all answers 404 like one that never was — "gone" and "not yours" must look the same.
+ */
+export function staleOrMissing(current: unknown, what: string): never {
+  throw current === null || current === undefined ? notFound(what) : stale(current);
+}
+
 /** zod issues → one message per field (the first), keyed by dotted path. */
 export function fieldErrors(error: ZodError): Record<string, string> {
   const out: Record<string, string> = {};

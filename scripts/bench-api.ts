@@ -9,7 +9,7 @@ import { createPlanSet } from "@/db/queries/plan-sets";
 import { createProject } from "@/db/queries/projects";
 import { listSheets, updateSheet } from "@/db/queries/sheets";
 import { createTag } from "@/db/queries/tags";
-import { createUnitType } from "@/db/queries/unit-types";
+import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { signUpUser } from "@/db/queries/users";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";

@@ -4,7 +4,7 @@ import { db } from "../client";
 import { planSets, projects } from "../schema";
 import { createPlanSet } from "../queries/plan-sets";
 import { listSheets, updateSheet } from "../queries/sheets";
-import { createUnitType } from "../queries/unit-types";
+import { insertUnitType as createUnitType } from "../queries/unit-types";
 import { createOpeningType } from "../queries/opening-types";
 import { createTag } from "../queries/tags";
 import { inspectPdf } from "@/lib/pdf/inspect";

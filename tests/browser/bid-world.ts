@@ -7,7 +7,7 @@ import { createPlanSet } from "@/db/queries/plan-sets";
 import { createProject } from "@/db/queries/projects";
 import { listSheets, updateSheet } from "@/db/queries/sheets";
 import { createTag } from "@/db/queries/tags";
-import { createUnitType } from "@/db/queries/unit-types";
+import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { signUpUser } from "@/db/queries/users";
 import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";

@@ -6,7 +6,7 @@ import * as tagsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/r
 import * as tagRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/[tagId]/route";
 import * as countsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/counts/route";
 import { createTag } from "@/db/queries/tags";
-import { createUnitType } from "@/db/queries/unit-types";
+import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { updateSheet } from "@/db/queries/sheets";
 import type { CountsView, SheetView, TagView } from "@/lib/plans/api-types";
 import { call, sessionCookie } from "./helpers/http";

@@ -6,7 +6,7 @@ import { createProject } from "@/db/queries/projects";
 import { createInvitation } from "@/db/queries/invitations";
 import { signUpUser } from "@/db/queries/users";
 import { createPlanSet } from "@/db/queries/plan-sets";
-import { createUnitType } from "@/db/queries/unit-types";
+import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { createOpeningType } from "@/db/queries/opening-types";
 import { createTag } from "@/db/queries/tags";
 import { listSheets } from "@/db/queries/sheets";

@@ -6,7 +6,7 @@ import { db, pool } from "@/db/client";
 import { priceBookItems, priceBooks } from "@/db/schema";
 import { createOpeningType } from "@/db/queries/opening-types";
 import { createPlanSet } from "@/db/queries/plan-sets";
-import { createProject } from "@/db/queries/projects";
+import { createProject } from "@/lib/server/projects/projects";
 import { listSheets, updateSheet } from "@/db/queries/sheets";
 import { createTag } from "@/db/queries/tags";
 import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";

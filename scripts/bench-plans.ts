@@ -4,7 +4,7 @@
 import { chromium, type BrowserContext, type Page } from "@playwright/test";
 import { encode } from "next-auth/jwt";
 import { pool } from "@/db/client";
-import { createProject } from "@/db/queries/projects";
+import { createProject } from "@/lib/server/projects/projects";
 import { signUpUser } from "@/db/queries/users";
 import { generatePlanSet } from "@/lib/plans/demo-plan";
 import { SHEET_RENDER_MARK } from "@/lib/plans/viewer/render-marks";

@@ -1,8 +1,7 @@
 import { and, desc, eq, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { projects } from "../schema";
-import { invalid, notFound } from "@/lib/errors";
-import type { CreateProjectInput, UpdateProjectInput } from "@/lib/validators/project";
+import type { ProjectScope } from "./project-scope";
 
 /** What the API and pages show of a project; the tenant id stays on the server. */
 const projectFields = {
@@ -21,25 +20,22 @@ const projectFields = {
     where t.project_id = projects.id and t.org_id = projects.org_id and t.status = 'submitted' limit 1)`,
 } as const;
 
-/** Holds the project row until the transaction ends, so status changes and submits take turns. */
-export async function lockProject({ orgId, projectId }: { orgId: string; projectId: string }, tx: Tx) {
-  const [row] = await tx
-    .select({ id: projects.id })
-    .from(projects)
-    .where(and(eq(projects.orgId, orgId), eq(projects.id, projectId)))
-    .for("update");
-  if (!row) throw notFound("No such project.");
+const scoped = ({ orgId, projectId }: ProjectScope) => and(eq(projects.orgId, orgId), eq(projects.id, projectId));
+
+export type ProjectStatus = (typeof projects.status.enumValues)[number];
+
+export interface ProjectValues {
+  name?: string;
+  generalContractor?: string | null;
+  bidDue?: string | null;
+  status?: ProjectStatus;
+  archivedAt?: Date | null;
 }
 
-/**
- * The status follows from the takeoffs: "draft" until one is submitted, then "submitted" — which
- * the team may move on to "won" or "lost" (and back) once the award is known. A hand-set status
- * that contradicts the takeoffs is refused rather than stored.
- */
-function statusRefusal(status: string, submitted: { name: string } | null): string | null {
-  if (submitted && status === "draft") return `"${submitted.name}" is submitted as the bid, so the project is no longer a draft.`;
-  if (!submitted && status !== "draft") return `Submit one of the project's takeoffs first: the status becomes "submitted" with it, and won or lost after that.`;
-  return null;
+/** Holds the project row until the transaction ends, so status changes and submits take turns; false if there is none. */
+export async function lockProject(s: ProjectScope, tx: Tx): Promise<boolean> {
+  const [row] = await tx.select({ id: projects.id }).from(projects).where(scoped(s)).for("update");
+  return row !== undefined;
 }
 
 export async function listProjects({ orgId, includeArchived = false }: { orgId: string; includeArchived?: boolean }) {
@@ -50,51 +46,20 @@ export async function listProjects({ orgId, includeArchived = false }: { orgId: 
     .orderBy(sql`${projects.bidDue} asc nulls last`, desc(projects.createdAt));
 }
 
-export async function getProject({ orgId, projectId }: { orgId: string; projectId: string }) {
-  const [row] = await db
-    .select(projectFields)
-    .from(projects)
-    .where(and(eq(projects.orgId, orgId), eq(projects.id, projectId)))
-    .limit(1);
-  if (!row) throw notFound("No such project.");
-  return row;
+export async function findProject(s: ProjectScope, tx: Tx = db) {
+  const [row] = await tx.select(projectFields).from(projects).where(scoped(s)).limit(1);
+  return row ?? null;
 }
 
-export async function createProject({ orgId, userId, input }: { orgId: string; userId: string; input: CreateProjectInput }) {
-  const [row] = await db
-    .insert(projects)
-    .values({
-      orgId,
-      createdBy: userId,
-      name: input.name,
-      generalContractor: input.generalContractor ?? null,
-      bidDue: input.bidDue ?? null,
-    })
-    .returning(projectFields);
+export async function insertProject(orgId: string, createdBy: string, values: { name: string; generalContractor: string | null; bidDue: string | null }) {
+  const [row] = await db.insert(projects).values({ orgId, createdBy, ...values }).returning(projectFields);
   return row!;
 }
 
-export async function updateProject({ orgId, projectId, input }: { orgId: string; projectId: string; input: UpdateProjectInput }) {
-  const { archived, ...fields } = input;
-  await db.transaction(async (tx) => {
-    if (fields.status !== undefined) {
-      await lockProject({ orgId, projectId }, tx);
-      const [row] = await tx.select({ submitted: projectFields.submittedTakeoff }).from(projects).where(and(eq(projects.orgId, orgId), eq(projects.id, projectId)));
-      const refusal = statusRefusal(fields.status, row?.submitted ?? null);
-      if (refusal) throw invalid({ status: refusal }, "The status follows from the project's takeoffs.");
-    }
-    const rows = await tx
-      .update(projects)
-      .set({
-        ...fields,
-        ...(archived === undefined ? {} : { archivedAt: archived ? new Date() : null }),
-        updatedAt: new Date(),
-      })
-      .where(and(eq(projects.orgId, orgId), eq(projects.id, projectId)))
-      .returning({ id: projects.id });
-    if (rows.length === 0) throw notFound("No such project.");
-  });
-  return getProject({ orgId, projectId });
+/** Writes the given columns (and updatedAt); false when the project is not there. */
+export async function updateProjectRow(s: ProjectScope, values: ProjectValues, tx: Tx = db): Promise<boolean> {
+  const rows = await tx.update(projects).set({ ...values, updatedAt: new Date() }).where(scoped(s)).returning({ id: projects.id });
+  return rows.length > 0;
 }
 
-export type ProjectView = Awaited<ReturnType<typeof getProject>>;
+export type ProjectView = NonNullable<Awaited<ReturnType<typeof findProject>>>;

@@ -1,12 +1,10 @@
 import { and, desc, eq, inArray } from "drizzle-orm";
 import { db } from "../client";
 import { projects, takeoffs } from "../schema";
-import { notFound } from "@/lib/errors";
-import type { ComparedTakeoff } from "@/lib/takeoffs/compare";
 
-/** Takeoffs of any of the organisation's projects, in the order asked; one that is not the org's is "not found". */
-export async function getTakeoffsToCompare(orgId: string, ids: string[]): Promise<ComparedTakeoff[]> {
-  const rows = await db
+/** Takeoffs of any of the organisation's projects with these ids (in no particular order). */
+export async function findTakeoffsByIds(orgId: string, ids: string[]) {
+  return db
     .select({
       id: takeoffs.id,
       name: takeoffs.name,
@@ -20,12 +18,6 @@ export async function getTakeoffsToCompare(orgId: string, ids: string[]): Promis
     .from(takeoffs)
     .innerJoin(projects, eq(projects.id, takeoffs.projectId))
     .where(and(eq(takeoffs.orgId, orgId), inArray(takeoffs.id, ids)));
-  const byId = new Map(rows.map((r) => [r.id, r]));
-  return ids.map((id) => {
-    const row = byId.get(id);
-    if (!row) throw notFound("No such takeoff.");
-    return row;
-  });
 }
 
 /** Every takeoff of the organisation, newest first, for the picker. */

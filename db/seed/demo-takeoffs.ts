@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "../client";
 import { priceBookItems, priceBooks, projects, takeoffs } from "../schema";
-import { runTakeoff } from "../queries/takeoffs";
+import { runTakeoff } from "@/lib/server/takeoffs/run-takeoff";
 
 /**
  * Two takeoffs of the demo project so the results and compare pages have something to show: the base

@@ -29,6 +29,8 @@ export const takeoffs = pgTable(
     inputs: jsonb("inputs").$type<TakeoffInputs>().notNull(),
     prices: jsonb("prices").$type<TakeoffPrices>().notNull(),
     result: jsonb("result").$type<TakeoffResult>().notNull(),
+    /** SHA-256 of the engine version, inputs and prices the result was computed from: a rerun with the same reuses it. */
+    inputHash: text("input_hash"),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
     submittedAt: timestamp("submitted_at", { withTimezone: true }),
@@ -36,6 +38,7 @@ export const takeoffs = pgTable(
   },
   (t) => [
     index("takeoffs_project_idx").on(t.projectId, t.createdAt),
+    index("takeoffs_input_hash_idx").on(t.orgId, t.inputHash),
     // A project is bid once: at most one of its takeoffs is the submitted bid, whatever races the app loses.
     uniqueIndex("takeoffs_one_submitted_per_project").on(t.projectId).where(sql`${t.status} = 'submitted'`),
   ],

@@ -9,7 +9,7 @@ import { expect, test } from "@playwright/test";
 import { db } from "@/db/client";
 import { priceBooks } from "@/db/schema";
 import { createPriceBookItem } from "@/db/queries/price-book-items";
-import { runTakeoff } from "@/db/queries/takeoffs";
+import { runTakeoff } from "@/lib/server/takeoffs/run-takeoff";
 import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
 import { seedBidWorld } from "./bid-world";
 import { runId, signIn, signOut } from "./helpers";

@@ -6,7 +6,7 @@
 import { expect, test } from "@playwright/test";
 import { UTApi, UTFile } from "uploadthing/server";
 import { createPlanSet } from "@/db/queries/plan-sets";
-import { createProject } from "@/db/queries/projects";
+import { createProject } from "@/lib/server/projects/projects";
 import { signUpUser } from "@/db/queries/users";
 import { generatePlanSet } from "@/lib/plans/demo-plan";
 import { inspectPdf } from "@/lib/pdf/inspect";

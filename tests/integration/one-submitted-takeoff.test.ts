@@ -5,7 +5,7 @@ import * as submitRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/take
 import * as projectRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/route";
 import { db } from "@/db/client";
 import { takeoffs } from "@/db/schema";
-import type { TakeoffView } from "@/db/queries/takeoffs";
+import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
 import { addTestPriceBook } from "./helpers/takeoff-world";

@@ -3,7 +3,7 @@ import * as settingsRoute from "@/app/api/orgs/[orgSlug]/settings/route";
 import * as openingTypesRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/opening-types/route";
 import * as takeoffsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/takeoffs/route";
 import type { Role } from "@/db/schema";
-import type { TakeoffView } from "@/db/queries/takeoffs";
+import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import { formatLengthExact } from "@/takeoff";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";

@@ -5,7 +5,7 @@ import * as takeoffsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/ta
 import { createPlanSet } from "@/db/queries/plan-sets";
 import { listSheets } from "@/db/queries/sheets";
 import { createTag } from "@/db/queries/tags";
-import type { TakeoffView } from "@/db/queries/takeoffs";
+import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import type { CountsView, SheetView } from "@/lib/plans/api-types";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";

@@ -7,7 +7,7 @@ import * as orderRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/takeo
 import * as pdfRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId]/bid-pdf/route";
 import * as sendsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId]/sends/route";
 import type { Role } from "@/db/schema";
-import type { TakeoffView } from "@/db/queries/takeoffs";
+import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import { outboxDir } from "@/lib/env";
 import { readOutbox } from "@/lib/mail/outbox";
 import { call, sessionCookie } from "./helpers/http";

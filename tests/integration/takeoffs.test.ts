@@ -7,7 +7,7 @@ import { priceBookItems, takeoffs, type Role } from "@/db/schema";
 import { createOpeningType } from "@/db/queries/opening-types";
 import { createTag } from "@/db/queries/tags";
 import { computeTakeoff } from "@/lib/takeoffs/compute";
-import type { TakeoffView } from "@/db/queries/takeoffs";
+import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
 import { addTestPriceBook } from "./helpers/takeoff-world";

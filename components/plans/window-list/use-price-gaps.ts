@@ -2,7 +2,7 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
-import type { PriceGapsView } from "@/db/queries/price-gaps";
+import type { PriceGapsView } from "@/lib/server/takeoffs/price-gaps";
 import { priceBooksQuery } from "@/lib/client/price-books";
 import { plansApi, projectApi } from "@/lib/plans/window-list/request";
 

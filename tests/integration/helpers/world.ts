@@ -2,7 +2,7 @@ import { randomBytes } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, users, type Role } from "@/db/schema";
-import { createProject } from "@/db/queries/projects";
+import { createProject } from "@/lib/server/projects/projects";
 import { createInvitation } from "@/db/queries/invitations";
 import { signUpUser } from "@/db/queries/users";
 import { createPlanSet } from "@/db/queries/plan-sets";

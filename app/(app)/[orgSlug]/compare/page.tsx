@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { getTakeoffsToCompare, listOrganisationTakeoffs } from "@/db/queries/takeoff-compare";
+import { getTakeoffsToCompare, listOrganisationTakeoffs } from "@/lib/server/takeoffs/compare";
 import { requireOrg } from "@/lib/auth/page-context";
 import { toAppError } from "@/lib/errors";
 import { column, explainDifferences } from "@/lib/takeoffs/compare";

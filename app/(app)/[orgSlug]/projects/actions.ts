@@ -1,6 +1,6 @@
 "use server";
 
-import { createProject } from "@/db/queries/projects";
+import { createProject } from "@/lib/server/projects/projects";
 import { orgAction } from "@/lib/actions/org-action";
 import { createProjectSchema } from "@/lib/validators/project";
 

@@ -7,7 +7,7 @@ import { Card, Notice } from "@/components/ui/card";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { api } from "@/lib/api-client";
 import { formatDate } from "@/lib/format-date";
-import type { ProjectView } from "@/db/queries/projects";
+import type { ProjectView } from "@/lib/server/projects/projects";
 import { NewProjectForm } from "./new-project-form";
 
 export function ProjectsView({ orgSlug, canWrite }: { orgSlug: string; canWrite: boolean }) {

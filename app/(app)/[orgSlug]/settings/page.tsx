@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { getSettings } from "@/db/queries/settings";
+import { getSettings } from "@/lib/server/settings/settings";
 import { requireOrg } from "@/lib/auth/page-context";
 import { SettingsForm } from "./settings-client";
 

@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { notFound } from "next/navigation";
 import Link from "next/link";
-import { getProject } from "@/db/queries/projects";
+import { getProject } from "@/lib/server/projects/projects";
 import { requireOrg } from "@/lib/auth/page-context";
 import { AppError } from "@/lib/errors";
 import { ProjectTabs } from "@/components/shell/project-tabs";

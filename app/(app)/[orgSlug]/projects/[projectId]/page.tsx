@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { getProject } from "@/db/queries/projects";
+import { getProject } from "@/lib/server/projects/projects";
 import { requireOrg } from "@/lib/auth/page-context";
 import { AppError } from "@/lib/errors";
 import { ProjectDetail } from "./project-client";

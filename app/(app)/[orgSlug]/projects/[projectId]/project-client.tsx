@@ -8,7 +8,7 @@ import { Field, Select, TextInput } from "@/components/ui/field";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { api, ApiError } from "@/lib/api-client";
 import { formatDate } from "@/lib/format-date";
-import type { ProjectView } from "@/db/queries/projects";
+import type { ProjectView } from "@/lib/server/projects/projects";
 
 type Patch = Partial<{ name: string; generalContractor: string; bidDue: string; status: string; archived: boolean }>;
 

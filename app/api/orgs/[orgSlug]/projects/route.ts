@@ -1,6 +1,6 @@
 // GET /api/orgs/[orgSlug]/projects — list projects; POST — create one
 import { NextResponse } from "next/server";
-import { createProject, listProjects } from "@/db/queries/projects";
+import { createProject, listProjects } from "@/lib/server/projects/projects";
 import { withOrg } from "@/lib/api/with-org";
 import { readJson } from "@/lib/api/read-input";
 import { createProjectSchema } from "@/lib/validators/project";

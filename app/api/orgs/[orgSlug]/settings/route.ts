@@ -1,6 +1,6 @@
 // GET /api/orgs/[orgSlug]/settings — the company's trim defaults, kerf and waste allowance; PATCH — change them (admins)
 import { NextResponse } from "next/server";
-import { getSettings, updateSettings } from "@/db/queries/settings";
+import { getSettings, updateSettings } from "@/lib/server/settings/settings";
 import { withOrg } from "@/lib/api/with-org";
 import { readJson } from "@/lib/api/read-input";
 import { settingsSchema } from "@/lib/validators/settings";

@@ -1,6 +1,6 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId] — one project; PATCH — rename, contractor, due date, status, archive
 import { NextResponse } from "next/server";
-import { getProject, updateProject } from "@/db/queries/projects";
+import { getProject, updateProject } from "@/lib/server/projects/projects";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId, readJson } from "@/lib/api/read-input";
 import { updateProjectSchema } from "@/lib/validators/project";

@@ -1,7 +1,7 @@
 // GET /api/orgs/[orgSlug]/takeoffs/compare?ids=a,b[,c,d] — two to four takeoffs side by side, with what changed
 import { NextResponse } from "next/server";
 import { z } from "zod";
-import { getTakeoffsToCompare } from "@/db/queries/takeoff-compare";
+import { getTakeoffsToCompare } from "@/lib/server/takeoffs/compare";
 import { withOrg } from "@/lib/api/with-org";
 import { fieldErrors, invalid } from "@/lib/errors";
 import { column, explainDifferences } from "@/lib/takeoffs/compare";

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { getTakeoff } from "@/db/queries/takeoffs";
+import { getTakeoff } from "@/lib/server/takeoffs/takeoffs";
 import { requireOrg } from "@/lib/auth/page-context";
 import { AppError } from "@/lib/errors";
 import { toDetail } from "@/lib/takeoffs/view";

@@ -1,6 +1,6 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId]/price-gaps[?priceBookId=…] — what the window list needs that the price book lacks
 import { NextResponse } from "next/server";
-import { listPriceGaps } from "@/db/queries/price-gaps";
+import { listPriceGaps } from "@/lib/server/takeoffs/price-gaps";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { invalid } from "@/lib/errors";

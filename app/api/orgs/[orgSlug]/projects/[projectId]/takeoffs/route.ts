@@ -1,6 +1,7 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId]/takeoffs — the project's saved takeoffs; POST — run and save one
 import { NextResponse } from "next/server";
-import { listTakeoffs, runTakeoff } from "@/db/queries/takeoffs";
+import { runTakeoff } from "@/lib/server/takeoffs/run-takeoff";
+import { listTakeoffs } from "@/lib/server/takeoffs/takeoffs";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { readJson } from "@/lib/api/read-input";

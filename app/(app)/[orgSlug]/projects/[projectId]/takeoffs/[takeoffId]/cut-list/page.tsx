@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { getTakeoff } from "@/db/queries/takeoffs";
+import { getTakeoff } from "@/lib/server/takeoffs/takeoffs";
 import { requireOrg } from "@/lib/auth/page-context";
 import { AppError } from "@/lib/errors";
 import { isUuid } from "@/lib/ids";

@@ -1,7 +1,7 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId] — one saved takeoff; PATCH — rename (drafts only); DELETE — drafts only
 import { NextResponse } from "next/server";
-import { getTakeoff } from "@/db/queries/takeoffs";
-import { deleteTakeoff, updateTakeoff } from "@/db/queries/takeoff-lifecycle";
+import { getTakeoff } from "@/lib/server/takeoffs/takeoffs";
+import { deleteTakeoff, updateTakeoff } from "@/lib/server/takeoffs/lifecycle";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { parseId, readJson } from "@/lib/api/read-input";

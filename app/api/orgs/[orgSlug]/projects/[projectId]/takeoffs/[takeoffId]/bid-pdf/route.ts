@@ -1,5 +1,5 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId]/bid-pdf — the bid summary for the general contractor
-import { bidDocument } from "@/db/queries/takeoff-documents";
+import { bidDocument } from "@/lib/server/takeoffs/bid-document";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { parseId } from "@/lib/api/read-input";

@@ -1,6 +1,6 @@
 // POST /api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId]/copy — a draft copy to continue from
 import { NextResponse } from "next/server";
-import { copyTakeoff } from "@/db/queries/takeoff-lifecycle";
+import { copyTakeoff } from "@/lib/server/takeoffs/lifecycle";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { parseId } from "@/lib/api/read-input";

@@ -1,5 +1,5 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId]/order-csv — the material order as CSV, for purchasing
-import { getTakeoff } from "@/db/queries/takeoffs";
+import { getTakeoff } from "@/lib/server/takeoffs/takeoffs";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { parseId } from "@/lib/api/read-input";

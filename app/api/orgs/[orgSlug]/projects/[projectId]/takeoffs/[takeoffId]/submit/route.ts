@@ -1,6 +1,6 @@
 // POST /api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId]/submit — mark as the submitted bid, which locks it
 import { NextResponse } from "next/server";
-import { submitTakeoff } from "@/db/queries/takeoff-lifecycle";
+import { submitTakeoff } from "@/lib/server/takeoffs/lifecycle";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { parseId } from "@/lib/api/read-input";

@@ -1,10 +1,12 @@
 import { and, desc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { priceBookChanges, users } from "../schema";
-import type { FieldDiff, PriceBookChangeView } from "@/lib/price-book/types";
-import { getBookSummary, type PriceBookScope, type PriceBookWriter } from "./price-book-scope";
+import type { PriceBookScope, PriceBookWriter } from "./price-book-scope";
 
 export type ChangeAction = "book.create" | "book.update" | "book.delete" | "item.create" | "item.update" | "item.delete" | "import";
+
+/** Field → before and after, as the log stores it. */
+export type FieldDiff = Record<string, { before: unknown; after: unknown }>;
 
 export interface ChangeEntry {
   action: ChangeAction;
@@ -34,8 +36,7 @@ export async function recordChanges(tx: Tx, w: PriceBookWriter, entries: ChangeE
 export const MAX_CHANGES = 500;
 
 /** The book's log, newest first. */
-export async function listPriceBookChanges(s: PriceBookScope & { limit?: number }): Promise<PriceBookChangeView[]> {
-  await getBookSummary(s);
+export async function listChangeRows(s: PriceBookScope & { limit?: number }) {
   return db
     .select({
       id: priceBookChanges.id,

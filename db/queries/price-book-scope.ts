@@ -1,8 +1,6 @@
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { priceBookItems, priceBooks } from "../schema";
-import { notFound } from "@/lib/errors";
-import type { PriceBookItemView, PriceBookSummary } from "@/lib/price-book/types";
 
 /** What every price-book query takes: the tenant from the session, the book from the URL. */
 export interface PriceBookScope {
@@ -42,27 +40,28 @@ export const bookWhere = (s: PriceBookScope) => and(eq(priceBooks.orgId, s.orgId
 export const itemWhere = (s: PriceBookScope, itemId?: string) =>
   and(eq(priceBookItems.orgId, s.orgId), eq(priceBookItems.priceBookId, s.priceBookId), itemId ? eq(priceBookItems.id, itemId) : undefined);
 
-export async function getBookSummary(s: PriceBookScope, tx: Tx = db): Promise<PriceBookSummary> {
+export async function findBookSummary(s: PriceBookScope, tx: Tx = db) {
   const [row] = await tx.select(bookFields).from(priceBooks).where(bookWhere(s));
-  if (!row) throw notFound("No such price book.");
-  return row;
+  return row ?? null;
 }
 
 /**
- * The book, locked until the transaction ends. Every write to a book or its items takes this lock
- * first, so checks that span rows (unique supplier codes, an import's plan) cannot race each other.
+ * The book, locked until the transaction ends (null if there is none). Every write to a book or its items
+ * takes this lock first, so checks that span rows (unique supplier codes, an import's plan) cannot race.
  */
-export async function lockPriceBook(tx: Tx, s: PriceBookScope): Promise<PriceBookSummary> {
+export async function lockPriceBook(tx: Tx, s: PriceBookScope) {
   const [row] = await tx.select(bookFields).from(priceBooks).where(bookWhere(s)).for("update");
-  if (!row) throw notFound("No such price book.");
-  return row;
+  return row ?? null;
 }
 
 /** Kinds in the order the enum declares them (casing, stool, apron, extension, other), then by name. */
-export function listItems(s: PriceBookScope, tx: Tx = db): Promise<PriceBookItemView[]> {
+export function listItems(s: PriceBookScope, tx: Tx = db) {
   return tx
     .select(itemFields)
     .from(priceBookItems)
     .where(itemWhere(s))
     .orderBy(asc(priceBookItems.kind), sql`lower(${priceBookItems.name})`, asc(priceBookItems.id));
 }
+
+export type BookRow = NonNullable<Awaited<ReturnType<typeof findBookSummary>>>;
+export type ItemRow = Awaited<ReturnType<typeof listItems>>[number];

@@ -1,8 +1,8 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "../client";
 import { priceBooks } from "../schema";
-import { createPriceBook } from "../queries/price-books";
-import { createPriceBookItem } from "../queries/price-book-items";
+import { createPriceBook } from "@/lib/server/price-books/books";
+import { createPriceBookItem } from "@/lib/server/price-books/items";
 import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
 import { seedOnce } from "./seed-marks";
 

@@ -8,7 +8,7 @@ import { and, eq } from "drizzle-orm";
 import { expect, test } from "@playwright/test";
 import { db } from "@/db/client";
 import { priceBooks } from "@/db/schema";
-import { createPriceBookItem } from "@/db/queries/price-book-items";
+import { createPriceBookItem } from "@/lib/server/price-books/items";
 import { runTakeoff } from "@/lib/server/takeoffs/run-takeoff";
 import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
 import { seedBidWorld } from "./bid-world";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { ImportPreview } from "@/db/queries/price-book-import";
+import type { ImportPreview } from "@/lib/server/price-books/import";
 import { priceBookApi } from "./helpers/price-book-world";
 import { snapshot } from "./helpers/snapshot";
 import { addMember, makeOrg, type World } from "./helpers/world";

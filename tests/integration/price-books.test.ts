@@ -5,7 +5,7 @@ import * as booksRoute from "@/app/api/orgs/[orgSlug]/price-books/route";
 import * as bookRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/route";
 import * as csvRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/csv/route";
 import * as changesRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/changes/route";
-import type { ImportPreview } from "@/db/queries/price-book-import";
+import type { ImportPreview } from "@/lib/server/price-books/import";
 import type { PriceBookChangeView, PriceBookItemView, PriceBookView } from "@/lib/price-book/types";
 import { call, sessionCookie } from "./helpers/http";
 import { priceBookApi, type PriceBookApi } from "./helpers/price-book-world";

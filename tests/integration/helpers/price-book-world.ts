@@ -6,8 +6,8 @@ import * as itemsRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/
 import * as itemRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/items/[itemId]/route";
 import * as csvRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/csv/route";
 import * as changesRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/changes/route";
-import { createPriceBook } from "@/db/queries/price-books";
-import { createPriceBookItem } from "@/db/queries/price-book-items";
+import { createPriceBook } from "@/lib/server/price-books/books";
+import { createPriceBookItem } from "@/lib/server/price-books/items";
 import type { PriceBookChangeView, PriceBookView } from "@/lib/price-book/types";
 import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
 import { call, sessionCookie } from "./http";

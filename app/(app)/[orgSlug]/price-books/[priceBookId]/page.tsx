@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { getBookSummary } from "@/db/queries/price-book-scope";
+import { requireBook as getBookSummary } from "@/lib/server/price-books/book-scope";
 import { requireOrg } from "@/lib/auth/page-context";
 import { AppError } from "@/lib/errors";
 import { PriceBookView } from "./price-book-client";

@@ -1,6 +1,6 @@
 // GET /api/orgs/[orgSlug]/price-books — the organisation's price books; POST — create one (admins)
 import { NextResponse } from "next/server";
-import { createPriceBook, listPriceBooks } from "@/db/queries/price-books";
+import { createPriceBook, listPriceBooks } from "@/lib/server/price-books/books";
 import { withOrg } from "@/lib/api/with-org";
 import { readJson } from "@/lib/api/read-input";
 import { priceBookCreateSchema } from "@/lib/validators/price-book";

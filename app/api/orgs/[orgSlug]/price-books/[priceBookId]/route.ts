@@ -1,6 +1,6 @@
 // GET /api/orgs/[orgSlug]/price-books/[priceBookId] — the book with its items; PATCH — name, rates, markup, tax (version-checked); DELETE ?version=N
 import { NextResponse } from "next/server";
-import { deletePriceBook, getPriceBook, updatePriceBook } from "@/db/queries/price-books";
+import { deletePriceBook, getPriceBook, updatePriceBook } from "@/lib/server/price-books/books";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId, readJson, readVersion } from "@/lib/api/read-input";
 import { priceBookUpdateSchema } from "@/lib/validators/price-book";

@@ -1,6 +1,6 @@
 // GET /api/orgs/[orgSlug]/price-books/[priceBookId]/changes — the book's change log, newest first (?limit=N, at most 500)
 import { NextResponse } from "next/server";
-import { listPriceBookChanges } from "@/db/queries/price-book-changes";
+import { listPriceBookChanges } from "@/lib/server/price-books/changes";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId } from "@/lib/api/read-input";
 import { invalid } from "@/lib/errors";

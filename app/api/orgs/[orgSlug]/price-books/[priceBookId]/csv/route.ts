@@ -1,7 +1,7 @@
 // GET /api/orgs/[orgSlug]/price-books/[priceBookId]/csv — the items as a CSV download; POST { csv, mode, apply } — preview an import, or apply it all or nothing
 import { NextResponse, type NextRequest } from "next/server";
-import { getPriceBook } from "@/db/queries/price-books";
-import { applyPriceBookImport, previewPriceBookImport } from "@/db/queries/price-book-import";
+import { getPriceBook } from "@/lib/server/price-books/books";
+import { applyPriceBookImport, previewPriceBookImport } from "@/lib/server/price-books/import";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId } from "@/lib/api/read-input";
 import { AppError, fieldErrors, invalid } from "@/lib/errors";

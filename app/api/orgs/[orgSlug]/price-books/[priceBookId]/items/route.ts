@@ -1,6 +1,6 @@
 // POST /api/orgs/[orgSlug]/price-books/[priceBookId]/items — add a material to the book
 import { NextResponse } from "next/server";
-import { createPriceBookItem } from "@/db/queries/price-book-items";
+import { createPriceBookItem } from "@/lib/server/price-books/items";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId, readJson } from "@/lib/api/read-input";
 import { priceBookItemCreateSchema } from "@/lib/validators/price-book";

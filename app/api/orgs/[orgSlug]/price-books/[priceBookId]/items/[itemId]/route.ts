@@ -1,6 +1,6 @@
 // PATCH /api/orgs/[orgSlug]/price-books/[priceBookId]/items/[itemId] — edit a material (version-checked); DELETE ?version=N
 import { NextResponse } from "next/server";
-import { deletePriceBookItem, updatePriceBookItem } from "@/db/queries/price-book-items";
+import { deletePriceBookItem, updatePriceBookItem } from "@/lib/server/price-books/items";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId, readJson, readVersion } from "@/lib/api/read-input";
 import { priceBookItemUpdateSchema } from "@/lib/validators/price-book";

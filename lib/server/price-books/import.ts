@@ -1,15 +1,15 @@
 import { createHash } from "node:crypto";
-import { and, inArray, sql } from "drizzle-orm";
-import { db } from "../client";
-import { priceBookItems } from "../schema";
+import { db } from "@/db/client";
+import { deleteItems, insertItems, updateItemAt } from "@/db/queries/price-book-items";
+import { recordChanges, type ChangeEntry } from "@/db/queries/price-book-changes";
+import type { PriceBookScope, PriceBookWriter } from "@/db/queries/price-book-scope";
 import { AppError } from "@/lib/errors";
 import { readItemsCsv } from "@/lib/price-book/csv";
 import { itemSummary } from "@/lib/price-book/describe";
 import { itemDiff } from "@/lib/price-book/diff";
 import { planImport, type ImportMode, type ImportPlan } from "@/lib/price-book/import-plan";
 import type { PriceBookItemView } from "@/lib/price-book/types";
-import { recordChanges, type ChangeEntry } from "./price-book-changes";
-import { getBookSummary, itemWhere, listItems, lockPriceBook, type PriceBookScope, type PriceBookWriter } from "./price-book-scope";
+import { itemsOf as listItems, requireBook, requireLockedBook } from "./book-scope";
 
 export type ImportPreview = ImportPlan & { previewToken: string };
 interface ImportRequest {
@@ -38,7 +38,7 @@ function refused(preview: ImportPreview): AppError {
 
 /** What importing this CSV would do; nothing is written. */
 export async function previewPriceBookImport(s: PriceBookScope, input: ImportRequest): Promise<ImportPreview> {
-  await getBookSummary(s);
+  await requireBook(s);
   const items = await listItems(s);
   return { ...planImport(items, readItemsCsv(input.csv), input.mode), previewToken: tokenOf(items) };
 }
@@ -50,7 +50,7 @@ export async function previewPriceBookImport(s: PriceBookScope, input: ImportReq
  */
 export async function applyPriceBookImport(w: PriceBookWriter, input: ImportRequest): Promise<ImportPreview> {
   return db.transaction(async (tx) => {
-    await lockPriceBook(tx, w);
+    await requireLockedBook(tx, w);
     const items = await listItems(w, tx);
     const preview = { ...planImport(items, readItemsCsv(input.csv), input.mode), previewToken: tokenOf(items) };
     if (!preview.ok) throw refused(preview);
@@ -62,26 +62,16 @@ export async function applyPriceBookImport(w: PriceBookWriter, input: ImportRequ
     const via = `CSV import`;
 
     const creates = preview.rows.filter((r) => r.action === "create");
-    if (creates.length > 0) {
-      const rows = await tx
-        .insert(priceBookItems)
-        .values(creates.map((r) => ({ orgId: w.orgId, priceBookId: w.priceBookId, ...r.item! })))
-        .returning({ id: priceBookItems.id });
-      creates.forEach((r, i) => log.push({ action: "item.create", itemId: rows[i]!.id, summary: itemSummary("create", null, r.item, r.diff, via), diff: r.diff }));
-    }
+    const created = await insertItems(tx, w, creates.map((r) => r.item!));
+    creates.forEach((r, i) => log.push({ action: "item.create", itemId: created[i]!.id, summary: itemSummary("create", null, r.item, r.diff, via), diff: r.diff }));
     for (const r of preview.rows.filter((x) => x.action === "update")) {
-      await tx
-        .update(priceBookItems)
-        .set({ ...r.item!, version: sql`${priceBookItems.version} + 1`, updatedAt: new Date() })
-        .where(itemWhere(w, r.itemId!));
+      await updateItemAt(tx, w, r.itemId!, r.item!);
       log.push({ action: "item.update", itemId: r.itemId, summary: itemSummary("update", byId.get(r.itemId!)!, r.item, r.diff, via), diff: r.diff });
     }
-    if (preview.deletions.length > 0) {
-      await tx.delete(priceBookItems).where(and(itemWhere(w), inArray(priceBookItems.id, preview.deletions.map((d) => d.id))));
-      for (const d of preview.deletions) {
-        const diff = itemDiff(d, null);
-        log.push({ action: "item.delete", itemId: d.id, summary: itemSummary("delete", d, null, diff, via), diff });
-      }
+    await deleteItems(tx, w, preview.deletions.map((d) => d.id));
+    for (const d of preview.deletions) {
+      const diff = itemDiff(d, null);
+      log.push({ action: "item.delete", itemId: d.id, summary: itemSummary("delete", d, null, diff, via), diff });
     }
     if (log.length === 0) return preview;
     const c = preview.counts;

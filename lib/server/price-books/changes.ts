@@ -1,0 +1,12 @@
+import { listChangeRows, MAX_CHANGES } from "@/db/queries/price-book-changes";
+import type { PriceBookScope } from "@/db/queries/price-book-scope";
+import type { PriceBookChangeView } from "@/lib/price-book/types";
+import { requireBook } from "./book-scope";
+
+export { MAX_CHANGES };
+
+/** The book's log, newest first. */
+export async function listPriceBookChanges(s: PriceBookScope & { limit?: number }): Promise<PriceBookChangeView[]> {
+  await requireBook(s);
+  return listChangeRows(s);
+}

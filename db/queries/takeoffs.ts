@@ -57,6 +57,16 @@ export async function listTakeoffRows(s: ProjectScope) {
     .orderBy(desc(takeoffs.createdAt));
 }
 
+/** The takeoff's own fields without its snapshots: what can change after it ran (name, note, status). */
+export async function findTakeoffHeader(s: ProjectScope, id: string) {
+  const [row] = await db
+    .select(listFields)
+    .from(takeoffs)
+    .leftJoin(users, eq(users.id, takeoffs.createdBy))
+    .where(and(eq(takeoffs.orgId, s.orgId), eq(takeoffs.projectId, s.projectId), eq(takeoffs.id, id)));
+  return row ?? null;
+}
+
 export async function findTakeoff(s: ProjectScope, id: string) {
   const [row] = await db
     .select({ ...listFields, inputs: takeoffs.inputs, prices: takeoffs.prices, result: takeoffs.result })

@@ -57,3 +57,45 @@ describe("reusing a computed takeoff", () => {
     expect((await run(home, book.priceBookId)).result.openingsTotal).toBe(1);
   });
 });
+
+describe("the results route's kept snapshot text", () => {
+  const scopeOf = (w: World) => ({ orgId: w.org.id, projectId: w.project.id });
+
+  it("answers exactly what serialising the row would, fresh or kept, and follows renames and deletes", async () => {
+    const { getTakeoff } = await import("@/lib/server/takeoffs/takeoffs");
+    const { takeoffJson } = await import("@/lib/server/takeoffs/takeoff-json");
+    const { updateTakeoff, deleteTakeoff } = await import("@/lib/server/takeoffs/lifecycle");
+    const first = await run(home, book.priceBookId);
+    const s = scopeOf(home);
+    // The same JSON value (key order aside: PostgreSQL's jsonb keeps keys in its own order).
+    const expected = async () => JSON.parse(JSON.stringify({ takeoff: await getTakeoff(s, first.id) }));
+    expect(JSON.parse(await takeoffJson(s, first.id))).toEqual(await expected()); // kept by the run
+    expect(JSON.parse(await takeoffJson(s, first.id))).toEqual(await expected());
+    await updateTakeoff(s, first.id, { name: "Renamed", note: "after the run" });
+    const renamed = await takeoffJson(s, first.id);
+    expect(JSON.parse(renamed)).toEqual(await expected());
+    expect(JSON.parse(renamed).takeoff.name).toBe("Renamed");
+    await deleteTakeoff(s, first.id);
+    await expect(takeoffJson(s, first.id)).rejects.toMatchObject({ status: 404 });
+  });
+
+  it("a server that did not run the takeoff reads it once, then answers from the kept text", async () => {
+    const { getTakeoff } = await import("@/lib/server/takeoffs/takeoffs");
+    const { takeoffJson } = await import("@/lib/server/takeoffs/takeoff-json");
+    const { copyTakeoff } = await import("@/lib/server/takeoffs/lifecycle");
+    const s = scopeOf(home);
+    const first = await run(home, book.priceBookId);
+    const copy = await copyTakeoff({ ...s, userId: home.people.estimator.id }, first.id); // never kept by a run
+    const fresh = await takeoffJson(s, copy.id);
+    expect(JSON.parse(fresh)).toEqual(JSON.parse(JSON.stringify({ takeoff: await getTakeoff(s, copy.id) })));
+    expect(await takeoffJson(s, copy.id)).toBe(fresh);
+  });
+
+  it("another organisation's scope never reads the kept text", async () => {
+    const { takeoffJson } = await import("@/lib/server/takeoffs/takeoff-json");
+    const first = await run(home, book.priceBookId);
+    const other = await makeOrg("Quillfield");
+    await expect(takeoffJson({ orgId: other.org.id, projectId: home.project.id }, first.id)).rejects.toMatchObject({ status: 404 });
+    await expect(takeoffJson({ orgId: other.org.id, projectId: other.project.id }, first.id)).rejects.toMatchObject({ status: 404 });
+  });
+});

@@ -7,7 +7,7 @@ import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/lib/takeoffs
 import type { RunTakeoffInput } from "@/lib/validators/takeoff";
 import { takeoffInputHash } from "./input-hash";
 import { snapshotInputs, snapshotPrices } from "./snapshot";
-import { getTakeoff } from "./takeoffs";
+import { keepSnapshotText, snapshotMembers } from "./snapshot-text";
 
 /** The engine's refusals as the estimator's to fix (422 naming the field), not server faults. */
 async function compute(inputs: TakeoffInputs, prices: TakeoffPrices): Promise<TakeoffResult> {
@@ -28,6 +28,7 @@ async function compute(inputs: TakeoffInputs, prices: TakeoffPrices): Promise<Ta
  * Runs and saves a takeoff: snapshots of the window list, counts and prices as they are now, then the
  * engine. When this organisation already computed a takeoff from exactly these snapshots (same input
  * hash), its result is reused instead of solving again: the engine is pure, so the answer is the same.
+ * Returns the new takeoff's id.
  */
 export async function runTakeoff(s: ProjectScope & { userId: string }, input: RunTakeoffInput) {
   await requireProject(s);
@@ -50,5 +51,7 @@ export async function runTakeoff(s: ProjectScope & { userId: string }, input: Ru
     inputHash,
     createdBy: s.userId,
   });
-  return getTakeoff(s, id);
+  // The route answers with this takeoff next: its snapshots' text is made now, from what is in hand.
+  keepSnapshotText(s, id, snapshotMembers({ inputs, prices, result }));
+  return id;
 }

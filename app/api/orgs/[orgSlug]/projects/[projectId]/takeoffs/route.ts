@@ -1,10 +1,12 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId]/takeoffs — the project's saved takeoffs; POST — run and save one
 import { NextResponse } from "next/server";
-import { runTakeoff } from "@/lib/server/takeoffs/run-takeoff";
-import { listTakeoffs } from "@/lib/server/takeoffs/takeoffs";
 import { withOrg } from "@/lib/api/with-org";
+import { jsonText } from "@/lib/api/json-text";
 import { projectScope } from "@/lib/api/project-scope";
 import { readJson } from "@/lib/api/read-input";
+import { runTakeoff } from "@/lib/server/takeoffs/run-takeoff";
+import { takeoffJson } from "@/lib/server/takeoffs/takeoff-json";
+import { listTakeoffs } from "@/lib/server/takeoffs/takeoffs";
 import { runTakeoffSchema } from "@/lib/validators/takeoff";
 
 type Params = { orgSlug: string; projectId: string };
@@ -17,8 +19,8 @@ export const GET = withOrg<Params>(
 export const POST = withOrg<Params>(
   async ({ req, params, org }) => {
     const scope = { ...projectScope(org, params), userId: org.userId };
-    const takeoff = await runTakeoff(scope, await readJson(req, runTakeoffSchema));
-    return NextResponse.json({ takeoff }, { status: 201 });
+    const id = await runTakeoff(scope, await readJson(req, runTakeoffSchema));
+    return jsonText(await takeoffJson(scope, id), 201);
   },
   { permission: "takeoff.run" },
 );

@@ -1,6 +1,7 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId] — one saved takeoff; PATCH — rename (drafts only); DELETE — drafts only
 import { NextResponse } from "next/server";
-import { getTakeoff } from "@/lib/server/takeoffs/takeoffs";
+import { jsonText } from "@/lib/api/json-text";
+import { takeoffJson } from "@/lib/server/takeoffs/takeoff-json";
 import { deleteTakeoff, updateTakeoff } from "@/lib/server/takeoffs/lifecycle";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
@@ -10,8 +11,7 @@ import { updateTakeoffSchema } from "@/lib/validators/takeoff";
 type Params = { orgSlug: string; projectId: string; takeoffId: string };
 
 export const GET = withOrg<Params>(
-  async ({ params, org }) =>
-    NextResponse.json({ takeoff: await getTakeoff(projectScope(org, params), parseId(params.takeoffId, "takeoff")) }),
+  async ({ params, org }) => jsonText(await takeoffJson(projectScope(org, params), parseId(params.takeoffId, "takeoff"))),
   { permission: "takeoff.read" },
 );
 

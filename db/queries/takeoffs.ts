@@ -6,7 +6,7 @@ import { computeTakeoff, MissingItem, OpeningTypeProblem, PriceGaps } from "@/li
 import { DEFAULT_TAKEOFF_SETTINGS } from "@/lib/takeoffs/settings";
 import type { TakeoffInputs, TakeoffPrices } from "@/lib/takeoffs/types";
 import type { RunTakeoffInput } from "@/lib/validators/takeoff";
-import { getCounts } from "./counts";
+import { tallyCounts as getCounts } from "@/lib/server/plans/counts";
 import { listOpeningTypes } from "./opening-types";
 import { assertProject, type ProjectScope } from "./project-scope";
 import { listUnitTypes } from "./unit-types";

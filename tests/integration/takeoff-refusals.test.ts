@@ -9,8 +9,8 @@ import * as openingTypeRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]
 import * as priceGapsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/price-gaps/route";
 import { db } from "@/db/client";
 import { openingTypes, takeoffs } from "@/db/schema";
-import { createOpeningType } from "@/db/queries/opening-types";
-import { createTag } from "@/db/queries/tags";
+import { addOpeningType as createOpeningType } from "@/lib/server/plans/opening-types";
+import { addTag as createTag } from "@/lib/server/plans/tags";
 import type { TakeoffView } from "@/db/queries/takeoffs";
 import type { PriceGapsView } from "@/db/queries/price-gaps";
 import { call, sessionCookie } from "./helpers/http";

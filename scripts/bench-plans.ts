@@ -5,7 +5,7 @@ import { chromium, type BrowserContext, type Page } from "@playwright/test";
 import { encode } from "next-auth/jwt";
 import { pool } from "@/db/client";
 import { createProject } from "@/lib/server/projects/projects";
-import { signUpUser } from "@/db/queries/users";
+import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
 import { generatePlanSet } from "@/lib/plans/demo-plan";
 import { SHEET_RENDER_MARK } from "@/lib/plans/viewer/render-marks";
 

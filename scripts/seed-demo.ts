@@ -4,7 +4,8 @@
 import { and, eq } from "drizzle-orm";
 import { db, pool } from "@/db/client";
 import { memberships, organisations, projects, users } from "@/db/schema";
-import { getUserByEmail, uniqueOrgSlug } from "@/db/queries/users";
+import { getUserByEmail } from "@/db/queries/users";
+import { uniqueOrgSlug } from "@/lib/server/accounts/org-slug";
 import { hashPassword } from "@/lib/auth/password";
 import { seedDemoPlans } from "@/db/seed/demo-plans";
 import { seedDemoPriceBook } from "@/db/seed/demo-price-book";

@@ -1,8 +1,6 @@
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { memberships, organisations, users, type Role } from "../schema";
-import { conflict, notFound, unauthenticated } from "@/lib/errors";
-import { bumpSessionVersion } from "./users";
 
 export interface OrgContext {
   orgId: string;
@@ -13,16 +11,11 @@ export interface OrgContext {
 }
 
 /**
- * The caller's membership in the organisation at this slug, or null — "not a member" and "no such org" look the
- * same. The session check rides on this read: a cookie issued under an older session version (before sign-out,
- * a password change or removal) is refused as signed out (401), whatever the slug.
+ * The user's current session version with their membership in the organisation at this slug, in one
+ * read; the org fields are null when there is no such organisation or they are not a member of it.
+ * Null when there is no such user.
  */
-export async function getOrgContext(
-  session: { userId: string; sessionVersion: number },
-  orgSlug: string,
-): Promise<OrgContext | null> {
-  // Slugs come from slugify (a-z, 0-9, hyphens). Anything else names no org — and a NUL would make PostgreSQL raise.
-  if (!/^[a-z0-9-]{1,64}$/.test(orgSlug)) return null;
+export async function findMembershipBySlug(userId: string, orgSlug: string) {
   const [row] = await db
     .select({
       sessionVersion: users.sessionVersion,
@@ -34,11 +27,9 @@ export async function getOrgContext(
     .from(users)
     .leftJoin(organisations, eq(organisations.slug, orgSlug))
     .leftJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.orgId, organisations.id)))
-    .where(eq(users.id, session.userId))
+    .where(eq(users.id, userId))
     .limit(1);
-  if (!row || row.sessionVersion !== session.sessionVersion) throw unauthenticated();
-  if (!row.orgId || !row.orgSlug || !row.orgName || !row.role) return null;
-  return { orgId: row.orgId, orgSlug: row.orgSlug, orgName: row.orgName, userId: session.userId, role: row.role };
+  return row ?? null;
 }
 
 export async function listOrganisationsForUser(userId: string) {
@@ -66,57 +57,62 @@ export async function listMembers({ orgId }: { orgId: string }) {
     .orderBy(asc(users.name));
 }
 
-/**
- * Locks the organisation's admin rows and refuses when the change would leave it without an admin.
- * The lock makes two admins demoting each other at the same moment safe.
- */
-async function assertAnotherAdmin(tx: Tx, orgId: string, membershipId: string) {
+/** The organisation's admin memberships, locked for the rest of the transaction. */
+export async function lockAdmins(tx: Tx, orgId: string): Promise<string[]> {
   const admins = await tx
     .select({ id: memberships.id })
     .from(memberships)
     .where(and(eq(memberships.orgId, orgId), eq(memberships.role, "admin")))
     .for("update");
-  if (admins.every((a) => a.id === membershipId)) {
-    throw conflict("An organisation needs at least one admin. Make someone else an admin first.", {
-      role: "The last admin cannot be removed or demoted.",
-    });
-  }
+  return admins.map((a) => a.id);
 }
 
-async function lockMember(tx: Tx, orgId: string, membershipId: string) {
+/** The membership, locked for the rest of the transaction, or null. */
+export async function lockMember(tx: Tx, orgId: string, membershipId: string) {
   const [member] = await tx
     .select({ id: memberships.id, role: memberships.role })
     .from(memberships)
     .where(and(eq(memberships.orgId, orgId), eq(memberships.id, membershipId)))
     .for("update");
-  if (!member) throw notFound("No such member.");
-  return member;
+  return member ?? null;
 }
 
-export async function changeMemberRole({ orgId, membershipId, role }: { orgId: string; membershipId: string; role: Role }) {
-  return db.transaction(async (tx) => {
-    const member = await lockMember(tx, orgId, membershipId);
-    if (member.role === "admin" && role !== "admin") await assertAnotherAdmin(tx, orgId, membershipId);
-    const [row] = await tx
-      .update(memberships)
-      .set({ role })
-      .where(and(eq(memberships.orgId, orgId), eq(memberships.id, membershipId)))
-      .returning({ id: memberships.id, role: memberships.role });
-    return row!;
-  });
+export async function updateMemberRole(tx: Tx, { orgId, membershipId, role }: { orgId: string; membershipId: string; role: Role }) {
+  const [row] = await tx
+    .update(memberships)
+    .set({ role })
+    .where(and(eq(memberships.orgId, orgId), eq(memberships.id, membershipId)))
+    .returning({ id: memberships.id, role: memberships.role });
+  return row ?? null;
 }
 
-export async function removeMember({ orgId, membershipId }: { orgId: string; membershipId: string }) {
-  await db.transaction(async (tx) => {
-    const member = await lockMember(tx, orgId, membershipId);
-    if (member.role === "admin") await assertAnotherAdmin(tx, orgId, membershipId);
-    const [removed] = await tx
-      .delete(memberships)
-      .where(and(eq(memberships.orgId, orgId), eq(memberships.id, membershipId)))
-      .returning({ userId: memberships.userId });
-    // A removed person's open sessions end too, so nothing they had loaded keeps working anywhere.
-    if (removed) await bumpSessionVersion(removed.userId, tx);
-  });
+/** Deletes the membership; returns whose it was, or null when there was none. */
+export async function deleteMember(tx: Tx, { orgId, membershipId }: { orgId: string; membershipId: string }) {
+  const [removed] = await tx
+    .delete(memberships)
+    .where(and(eq(memberships.orgId, orgId), eq(memberships.id, membershipId)))
+    .returning({ userId: memberships.userId });
+  return removed?.userId ?? null;
+}
+
+/** Adds the membership unless the person already has one here; false when they had. */
+export async function insertMembership(tx: Tx, values: { orgId: string; userId: string; role: Role }): Promise<boolean> {
+  const joined = await tx
+    .insert(memberships)
+    .values(values)
+    .onConflictDoNothing({ target: [memberships.orgId, memberships.userId] })
+    .returning({ id: memberships.id });
+  return joined.length > 0;
+}
+
+/** Whether someone with this e-mail is already a member of the organisation. */
+export async function isMemberByEmail(orgId: string, email: string): Promise<boolean> {
+  const rows = await db
+    .select({ id: memberships.id })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.orgId, orgId), eq(users.email, email)));
+  return rows.length > 0;
 }
 
 export async function countMembers({ orgId }: { orgId: string }) {

@@ -1,7 +1,6 @@
 import { and, eq } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { projects } from "../schema";
-import { notFound } from "@/lib/errors"; // transitional: goes with assertProject
 
 export interface ProjectScope {
   orgId: string;
@@ -18,7 +17,3 @@ export async function projectExists({ orgId, projectId }: ProjectScope, tx: Tx =
   return row !== undefined;
 }
 
-/** @deprecated Transitional while queries move to lib/server: use requireProject there. */
-export async function assertProject(s: ProjectScope, tx: Tx = db) {
-  if (!(await projectExists(s, tx))) throw notFound("No such project.");
-}

@@ -1,10 +1,7 @@
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "../client";
 import { openingTypes, sheets, tags } from "../schema";
-import { invalid, notFound, stale } from "@/lib/errors";
-import type { TagView } from "@/lib/plans/api-types";
-import type { TagCreateInput, TagUpdateInput } from "@/lib/validators/plans";
-import { assertProject, type ProjectScope } from "./project-scope";
+import type { ProjectScope } from "./project-scope";
 
 /** A measured width more than this far from the type's width is flagged (inches). */
 export const WIDTH_CHECK_TOLERANCE = 1;
@@ -25,69 +22,69 @@ const scoped = (s: ProjectScope, id?: string) =>
 
 const select = () => db.select(fields).from(tags).innerJoin(openingTypes, eq(openingTypes.id, tags.openingTypeId));
 
-export async function listTags(s: ProjectScope, sheetId?: string): Promise<TagView[]> {
-  await assertProject(s);
+/** A tag as placed: where, of which type, and the width measured on the drawing if any. */
+export interface TagValues {
+  sheetId: string;
+  openingTypeId: string;
+  x: number;
+  y: number;
+  measuredWidth?: number | null;
+}
+
+/** The project's tags (of one sheet when given), in the order they were placed. */
+export async function listTags(s: ProjectScope, sheetId?: string) {
   return select()
     .where(and(scoped(s), sheetId ? eq(tags.sheetId, sheetId) : undefined))
     .orderBy(asc(tags.createdAt), asc(tags.id));
 }
 
-export async function getTag(s: ProjectScope, id: string): Promise<TagView> {
+export async function findTag(s: ProjectScope, id: string) {
   const [row] = await select().where(scoped(s, id));
-  if (!row) throw notFound("No such tag.");
-  return row;
+  return row ?? null;
 }
 
-/** Sheet and opening type must both belong to this project; naming another's is a field error, not a leak. */
-async function assertParts(s: ProjectScope, parts: { sheetId?: string; openingTypeId?: string }) {
-  if (parts.sheetId) {
-    const [row] = await db.select({ id: sheets.id }).from(sheets).where(and(eq(sheets.orgId, s.orgId), eq(sheets.projectId, s.projectId), eq(sheets.id, parts.sheetId)));
-    if (!row) throw invalid({ sheetId: "No such sheet in this project." });
-  }
-  if (parts.openingTypeId) {
-    const [row] = await db
-      .select({ id: openingTypes.id })
-      .from(openingTypes)
-      .where(and(eq(openingTypes.orgId, s.orgId), eq(openingTypes.projectId, s.projectId), eq(openingTypes.id, parts.openingTypeId)));
-    if (!row) throw invalid({ openingTypeId: "No such opening type in this project." });
-  }
+export async function isSheetInProject(s: ProjectScope, sheetId: string): Promise<boolean> {
+  const [row] = await db.select({ id: sheets.id }).from(sheets).where(and(eq(sheets.orgId, s.orgId), eq(sheets.projectId, s.projectId), eq(sheets.id, sheetId)));
+  return row !== undefined;
 }
 
-export async function createTag(s: ProjectScope & { userId: string }, input: TagCreateInput): Promise<TagView> {
-  await assertProject(s);
-  await assertParts(s, input);
+export async function isOpeningTypeInProject(s: ProjectScope, openingTypeId: string): Promise<boolean> {
+  const [row] = await db
+    .select({ id: openingTypes.id })
+    .from(openingTypes)
+    .where(and(eq(openingTypes.orgId, s.orgId), eq(openingTypes.projectId, s.projectId), eq(openingTypes.id, openingTypeId)));
+  return row !== undefined;
+}
+
+/** Returns the new tag's id. */
+export async function insertTag(s: ProjectScope & { userId: string }, values: TagValues): Promise<string> {
   const [row] = await db
     .insert(tags)
     .values({
       orgId: s.orgId,
       projectId: s.projectId,
-      sheetId: input.sheetId,
-      openingTypeId: input.openingTypeId,
-      x: input.x,
-      y: input.y,
-      measuredWidth: input.measuredWidth ?? null,
+      sheetId: values.sheetId,
+      openingTypeId: values.openingTypeId,
+      x: values.x,
+      y: values.y,
+      measuredWidth: values.measuredWidth ?? null,
       createdBy: s.userId,
     })
     .returning({ id: tags.id });
-  return getTag(s, row!.id);
+  return row!.id;
 }
 
-/** Move, retype or re-measure one tag; a stale version is refused with the tag as it is now. */
-export async function updateTag(s: ProjectScope, id: string, input: TagUpdateInput): Promise<TagView> {
-  const { version, ...set } = input;
-  await assertParts(s, { openingTypeId: set.openingTypeId });
+/** False when no row had this id and version. */
+export async function updateTagAt(s: ProjectScope, id: string, version: number, set: Partial<Omit<TagValues, "sheetId">>): Promise<boolean> {
   const rows = await db
     .update(tags)
     .set({ ...set, version: sql`${tags.version} + 1`, updatedAt: new Date() })
     .where(and(scoped(s, id), eq(tags.version, version)))
     .returning({ id: tags.id });
-  // A tag deleted meanwhile answers 404 like one that never was: "gone" and "not yours" must look the same.
-  if (rows.length === 0) throw stale(await getTag(s, id));
-  return getTag(s, id);
+  return rows.length > 0;
 }
 
-export async function deleteTag(s: ProjectScope, id: string, version: number) {
+export async function deleteTagAt(s: ProjectScope, id: string, version: number): Promise<boolean> {
   const rows = await db.delete(tags).where(and(scoped(s, id), eq(tags.version, version))).returning({ id: tags.id });
-  // A tag deleted meanwhile answers 404 like one that never was: "gone" and "not yours" must look the same.
-  if (rows.length === 0) throw stale(await getTag(s, id));
+  return rows.length > 0;
 }

@@ -1,13 +1,12 @@
 import { and, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
-import { memberships, organisations, users } from "../schema";
-import { slugify, slugSuffix } from "@/lib/slug";
-import { conflict } from "@/lib/errors";
-import { hashPassword } from "@/lib/auth/password";
-import type { SignUpInput } from "@/lib/validators/user";
+import { users } from "../schema";
 
 /** Public fields only: the password hash never leaves this layer except for the credential check. */
 export const publicUser = { id: users.id, name: users.name, email: users.email } as const;
+
+/** The unique constraint a second account with the same e-mail breaks. */
+export const USER_EMAIL_KEY = "users_email_key";
 
 export async function getUserByEmail(email: string, tx: Tx = db) {
   const [row] = await tx.select().from(users).where(eq(users.email, email.toLowerCase())).limit(1);
@@ -37,36 +36,8 @@ export async function bumpSessionVersion(userId: string, tx: Tx = db) {
     .where(eq(users.id, userId));
 }
 
-/** Picks a slug nobody has: the plain one if free, else with a short random suffix. */
-export async function uniqueOrgSlug(name: string, tx: Tx = db): Promise<string> {
-  const base = slugify(name);
-  for (let attempt = 0; attempt < 5; attempt++) {
-    const slug = attempt === 0 ? base : `${base}-${slugSuffix()}`;
-    const taken = await tx.select({ id: organisations.id }).from(organisations).where(eq(organisations.slug, slug));
-    if (taken.length === 0) return slug;
-  }
-  throw conflict("Could not choose an address for the organisation; try another name.");
-}
-
-/** Sign-up: the person, their organisation, and their admin membership, all or nothing. */
-export async function signUpUser(input: SignUpInput) {
-  const passwordHash = await hashPassword(input.password);
-  return db.transaction(async (tx) => {
-    if (await getUserByEmail(input.email, tx)) {
-      throw conflict("An account with this e-mail already exists. Sign in instead.", {
-        email: "An account with this e-mail already exists.",
-      });
-    }
-    const [user] = await tx
-      .insert(users)
-      .values({ name: input.name, email: input.email, passwordHash })
-      .returning(publicUser);
-    const slug = await uniqueOrgSlug(input.organisationName, tx);
-    const [org] = await tx
-      .insert(organisations)
-      .values({ name: input.organisationName, slug })
-      .returning({ id: organisations.id, slug: organisations.slug, name: organisations.name });
-    await tx.insert(memberships).values({ orgId: org!.id, userId: user!.id, role: "admin" });
-    return { user: user!, organisation: org! };
-  });
+/** A new account; the password arrives already hashed. */
+export async function insertUser(tx: Tx, values: { name: string; email: string; passwordHash: string }) {
+  const [user] = await tx.insert(users).values(values).returning(publicUser);
+  return user!;
 }

@@ -2,14 +2,16 @@ import { and, eq } from "drizzle-orm";
 import { UTApi, UTFile } from "uploadthing/server";
 import { db } from "../client";
 import { planSets, projects } from "../schema";
-import { createPlanSet } from "../queries/plan-sets";
-import { listSheets, updateSheet } from "../queries/sheets";
+import { insertPlanSet } from "../queries/plan-sets";
+import { listSheets } from "../queries/sheets";
 import { insertUnitType as createUnitType } from "../queries/unit-types";
-import { createOpeningType } from "../queries/opening-types";
-import { createTag } from "../queries/tags";
+import { insertTag } from "../queries/tags";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
 import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
+// The window list and calibration go through their use cases: setbacks and scales are derived there.
+import { addOpeningType } from "@/lib/server/plans/opening-types";
+import { editSheet } from "@/lib/server/plans/sheets";
 import type { TrimSpec } from "@/takeoff";
 
 /** Invented counts for the invented building: how many of each unit the job has. */
@@ -41,13 +43,13 @@ export async function seedDemoPlans(orgId: string, projectId: string | null, use
   const [uploaded] = await new UTApi().uploadFiles([new UTFile([Buffer.from(bytes)], name, { type: "application/pdf" })]);
   if (!uploaded?.data) throw new Error(`could not store the demo plan set: ${uploaded?.error?.message ?? "no answer"}`);
   const inspection = await inspectPdf(bytes);
-  await createPlanSet(scope, { key: uploaded.data.key, name, size: bytes.byteLength }, inspection.pages);
+  await insertPlanSet(scope, { key: uploaded.data.key, name, size: bytes.byteLength }, inspection.pages);
 
   const unitTypes = new Map<string, string>();
   for (const [typeName, count] of Object.entries(UNIT_COUNTS)) unitTypes.set(typeName, (await createUnitType(scope, { name: typeName, count })).id);
   const openingTypes = new Map<string, string>();
   for (const [mark, size] of Object.entries(DEMO_WINDOW_TYPES) as [WindowMark, (typeof DEMO_WINDOW_TYPES)[WindowMark]][]) {
-    const created = await createOpeningType(scope, {
+    const created = await addOpeningType(scope, {
       mark,
       width: size.widthInches,
       height: size.heightInches,
@@ -64,11 +66,11 @@ export async function seedDemoPlans(orgId: string, projectId: string | null, use
     const plan = drawn[i]!;
     const unitTypeId = plan.unitTypeName ? (unitTypes.get(plan.unitTypeName) ?? null) : null;
     if (i === stored.length - 1) {
-      await updateSheet(scope, sheet.id, { version: sheet.version, unitTypeId });
+      await editSheet(scope, sheet.id, { version: sheet.version, unitTypeId });
       continue;
     }
     const k = plan.knownDimension;
-    await updateSheet(scope, sheet.id, {
+    await editSheet(scope, sheet.id, {
       version: sheet.version,
       unitTypeId,
       calibrationPoints: { ax: k.ax, ay: k.ay, bx: k.bx, by: k.by, length: k.inches },
@@ -76,7 +78,7 @@ export async function seedDemoPlans(orgId: string, projectId: string | null, use
     });
     if (i < 2) {
       for (const w of plan.windows) {
-        await createTag(scope, { sheetId: sheet.id, openingTypeId: openingTypes.get(w.mark)!, x: w.x, y: w.y });
+        await insertTag(scope, { sheetId: sheet.id, openingTypeId: openingTypes.get(w.mark)!, x: w.x, y: w.y });
       }
     }
   }

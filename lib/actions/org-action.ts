@@ -1,8 +1,8 @@
 import type { z } from "zod";
-import { getOrgContext, type OrgContext } from "@/db/queries/memberships";
 import { currentSession } from "@/lib/auth/session";
 import { fieldErrors, forbidden, notFound, toAppError, unauthenticated } from "@/lib/errors";
 import { can, type Permission } from "@/lib/permissions";
+import { getOrgContext, type OrgContext } from "@/lib/server/accounts/org-context";
 
 export type ActionResult<T> =
   | { ok: true; data: T }

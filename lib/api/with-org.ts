@@ -1,10 +1,10 @@
 import type { NextRequest } from "next/server";
-import { getOrgContext, type OrgContext } from "@/db/queries/memberships";
 import { sessionFromRequest } from "@/lib/auth/session";
 import { forbidden, notFound, unauthenticated } from "@/lib/errors";
 import { errorResponse } from "./error-response";
 import { refuseCrossSite } from "./same-origin";
 import { can, type Permission } from "@/lib/permissions";
+import { getOrgContext, type OrgContext } from "@/lib/server/accounts/org-context";
 
 type Params = Record<string, string>;
 type RouteContext<P> = { params: Promise<P> };

@@ -1,9 +1,9 @@
 import { cache } from "react";
 import { headers } from "next/headers";
 import { notFound, redirect } from "next/navigation";
-import { getOrgContext } from "@/db/queries/memberships";
 import { getSessionUser } from "@/db/queries/users";
 import { can, type Permission } from "@/lib/permissions";
+import { getOrgContext } from "@/lib/server/accounts/org-context";
 import { REQUEST_PATH_HEADER, safeReturnPath } from "./return-to";
 import { currentSession } from "./session";
 

@@ -7,13 +7,13 @@
 import { expect, test, type Page } from "@playwright/test";
 import { db } from "@/db/client";
 import { memberships, users } from "@/db/schema";
-import { createOpeningType } from "@/db/queries/opening-types";
-import { createPlanSet } from "@/db/queries/plan-sets";
 import { createProject } from "@/lib/server/projects/projects";
-import { listSheets, updateSheet } from "@/db/queries/sheets";
-import { createTag } from "@/db/queries/tags";
+import { addOpeningType as createOpeningType } from "@/lib/server/plans/opening-types";
+import { addPlanSet as createPlanSet } from "@/lib/server/plans/plan-sets";
+import { sheetsOf as listSheets, editSheet as updateSheet } from "@/lib/server/plans/sheets";
+import { addTag as createTag } from "@/lib/server/plans/tags";
 import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
-import { signUpUser } from "@/db/queries/users";
+import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
 import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";
 import { generatePlanSet } from "@/lib/plans/demo-plan";

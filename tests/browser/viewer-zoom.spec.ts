@@ -5,9 +5,9 @@
  */
 import { expect, test } from "@playwright/test";
 import { UTApi, UTFile } from "uploadthing/server";
-import { createPlanSet } from "@/db/queries/plan-sets";
 import { createProject } from "@/lib/server/projects/projects";
-import { signUpUser } from "@/db/queries/users";
+import { addPlanSet as createPlanSet } from "@/lib/server/plans/plan-sets";
+import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
 import { generatePlanSet } from "@/lib/plans/demo-plan";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { SHEET_RENDER_MARK } from "@/lib/plans/viewer/render-marks";

@@ -16,7 +16,7 @@ import type { PlanRouter } from "@/app/api/uploadthing/core";
 import * as fileRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/plan-sets/[planSetId]/file/route";
 import { db } from "@/db/client";
 import { pendingUploads, planSets, sheets } from "@/db/schema";
-import { ingestPlanUpload } from "@/lib/plans/ingest-upload";
+import { ingestPlanUpload } from "@/lib/server/plans/ingest-upload";
 import { generatePlanSet } from "@/lib/plans/demo-plan";
 import type { PlanUploadResult } from "@/lib/plans/api-types";
 import { startUploadStandIn, type UploadStandIn } from "@/lib/uploads/stand-in";

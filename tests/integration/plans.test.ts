@@ -5,9 +5,9 @@ import * as openingTypeRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]
 import * as tagsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/route";
 import * as tagRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/tags/[tagId]/route";
 import * as countsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/counts/route";
-import { createTag } from "@/db/queries/tags";
+import { addTag as createTag } from "@/lib/server/plans/tags";
 import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
-import { updateSheet } from "@/db/queries/sheets";
+import { editSheet as updateSheet } from "@/lib/server/plans/sheets";
 import type { CountsView, SheetView, TagView } from "@/lib/plans/api-types";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";

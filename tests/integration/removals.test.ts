@@ -5,8 +5,8 @@ import * as planSetRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/pla
 import * as openingTypeRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/opening-types/[openingTypeId]/route";
 import { db } from "@/db/client";
 import { sheets, tags } from "@/db/schema";
-import { updateSheet } from "@/db/queries/sheets";
-import { createTag } from "@/db/queries/tags";
+import { editSheet as updateSheet } from "@/lib/server/plans/sheets";
+import { addTag as createTag } from "@/lib/server/plans/tags";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
 import { makeOrg, type World } from "./helpers/world";

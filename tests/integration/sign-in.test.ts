@@ -1,6 +1,6 @@
 import { beforeEach, describe, expect, it } from "vitest";
 import { pool } from "@/db/client";
-import { throttlePolicy } from "@/db/queries/sign-in-throttle";
+import { throttlePolicy } from "@/lib/auth/throttle";
 import { authOptions, authorizeCredentials, SIGN_IN_FAILED } from "@/lib/auth/options";
 import { makeOrg, PASSWORD, unique } from "./helpers/world";
 

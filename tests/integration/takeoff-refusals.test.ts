@@ -9,10 +9,10 @@ import * as openingTypeRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]
 import * as priceGapsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/price-gaps/route";
 import { db } from "@/db/client";
 import { openingTypes, takeoffs } from "@/db/schema";
-import { createOpeningType } from "@/db/queries/opening-types";
-import { createTag } from "@/db/queries/tags";
 import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import type { PriceGapsView } from "@/lib/server/takeoffs/price-gaps";
+import { addOpeningType as createOpeningType } from "@/lib/server/plans/opening-types";
+import { addTag as createTag } from "@/lib/server/plans/tags";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
 import { addTestPriceBook } from "./helpers/takeoff-world";

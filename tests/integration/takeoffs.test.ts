@@ -4,8 +4,8 @@ import * as takeoffsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/ta
 import * as takeoffRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/takeoffs/[takeoffId]/route";
 import { db } from "@/db/client";
 import { priceBookItems, takeoffs, type Role } from "@/db/schema";
-import { createOpeningType } from "@/db/queries/opening-types";
-import { createTag } from "@/db/queries/tags";
+import { addOpeningType as createOpeningType } from "@/lib/server/plans/opening-types";
+import { addTag as createTag } from "@/lib/server/plans/tags";
 import { computeTakeoff } from "@/lib/takeoffs/compute";
 import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import { call, sessionCookie } from "./helpers/http";

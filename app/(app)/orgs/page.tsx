@@ -1,16 +1,16 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { redirect } from "next/navigation";
-import { listOrganisationsForUser } from "@/db/queries/memberships";
 import { requireUser } from "@/lib/auth/page-context";
 import { roleLabels } from "@/lib/permissions";
+import { organisationsOf } from "@/lib/server/accounts/organisations";
 import { Logo } from "@/components/logo";
 
 export const metadata: Metadata = { title: "Your organisations" };
 
 export default async function OrganisationsPage() {
   const user = await requireUser("/orgs");
-  const orgs = await listOrganisationsForUser(user.id);
+  const orgs = await organisationsOf(user.id);
   if (orgs.length === 1) redirect(`/${orgs[0]!.slug}/projects`);
   return (
     <main className="mx-auto max-w-lg px-6 py-12">

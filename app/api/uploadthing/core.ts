@@ -1,14 +1,12 @@
 import { createUploadthing, UTFiles, type FileRouter } from "uploadthing/next";
 import { UploadThingError } from "uploadthing/server";
 import { z } from "zod";
-import { getOrgContext } from "@/db/queries/memberships";
-import { recordPendingUploads } from "@/db/queries/pending-uploads";
-import { assertProject } from "@/db/queries/project-scope";
 import { sessionFromRequest } from "@/lib/auth/session";
 import { toAppError } from "@/lib/errors";
 import { can } from "@/lib/permissions";
-import { DEFAULT_PDF_LIMITS } from "@/lib/pdf/inspect";
-import { ingestPlanUpload } from "@/lib/plans/ingest-upload";
+import { getOrgContext } from "@/lib/server/accounts/org-context";
+import { ingestPlanUpload } from "@/lib/server/plans/ingest-upload";
+import { preparePlanUploads } from "@/lib/server/plans/plan-uploads";
 import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
 
 useLocalUploadStandInUnlessConfigured();
@@ -29,15 +27,12 @@ export const planRouter = {
       });
       if (!org) throw refuse("NOT_FOUND", "No such project.");
       if (!can(org.role, "plans.write")) throw refuse("FORBIDDEN", "Your role cannot upload plans.");
-      try {
-        await assertProject({ orgId: org.orgId, projectId: input.projectId });
-      } catch (error) {
-        throw refuse("NOT_FOUND", toAppError(error)?.message ?? "No such project.");
-      }
-      const tooBig = files.find((file) => file.size > DEFAULT_PDF_LIMITS.maxBytes);
-      if (tooBig) throw refuse("FORBIDDEN", `${tooBig.name} is larger than the 200 MB limit. Split the set and upload each part.`);
-      // Who uploads what, where, is kept on our side; the route handler ties each generated key to its row.
-      const ids = await recordPendingUploads({ orgId: org.orgId, projectId: input.projectId, userId: session.userId }, [...files]);
+      const scope = { orgId: org.orgId, projectId: input.projectId, userId: session.userId };
+      const ids = await preparePlanUploads(scope, [...files]).catch((error: unknown) => {
+        const known = toAppError(error);
+        if (!known) throw error;
+        throw refuse(known.status === 404 ? "NOT_FOUND" : "FORBIDDEN", known.message);
+      });
       return { [UTFiles]: files.map((file, i) => ({ ...file, customId: ids[i] })) };
     })
     // The callback's metadata is not trusted: the pending upload recorded above says where the file belongs.

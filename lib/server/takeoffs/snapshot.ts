@@ -1,4 +1,4 @@
-import { getCounts } from "@/db/queries/counts";
+import { tallyCounts as getCounts } from "@/lib/server/plans/counts";
 import { listOpeningTypes } from "@/db/queries/opening-types";
 import type { ProjectScope } from "@/db/queries/project-scope";
 import { findPriceBookRow, listPriceBookItemRows } from "@/db/queries/takeoffs";

@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { describeInvitation } from "@/db/queries/invitations";
 import { Notice } from "@/components/ui/card";
 import { toAppError } from "@/lib/errors";
 import { roleLabels } from "@/lib/permissions";
+import { describeInvitation } from "@/lib/server/members/invitations";
 import { AcceptInviteForm } from "./invite-client";
 
 export const metadata: Metadata = { title: "Join your team" };

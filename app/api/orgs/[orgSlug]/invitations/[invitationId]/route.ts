@@ -1,6 +1,6 @@
 // DELETE /api/orgs/[orgSlug]/invitations/[invitationId] — withdraw a pending invitation
 import { NextResponse } from "next/server";
-import { revokeInvitation } from "@/db/queries/invitations";
+import { revokeInvitation } from "@/lib/server/members/invitations";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId } from "@/lib/api/read-input";
 

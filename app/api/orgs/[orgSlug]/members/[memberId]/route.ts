@@ -1,6 +1,6 @@
 // PATCH /api/orgs/[orgSlug]/members/[memberId] — change a member's role; DELETE — remove the member
 import { NextResponse } from "next/server";
-import { changeMemberRole, removeMember } from "@/db/queries/memberships";
+import { changeMemberRole, removeMember } from "@/lib/server/members/members";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId, readJson } from "@/lib/api/read-input";
 import { changeRoleSchema } from "@/lib/validators/member";

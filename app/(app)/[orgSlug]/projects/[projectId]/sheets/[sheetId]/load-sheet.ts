@@ -1,9 +1,9 @@
 import { cache } from "react";
 import { notFound } from "next/navigation";
-import { getSheet } from "@/db/queries/sheets";
 import { requireOrg } from "@/lib/auth/page-context";
 import { AppError } from "@/lib/errors";
 import { isUuid } from "@/lib/ids";
+import { sheetOf } from "@/lib/server/plans/sheets";
 
 /**
  * The sheet for this page, read once per request by the layout (which answers 404 before anything streams, so the
@@ -13,7 +13,7 @@ import { isUuid } from "@/lib/ids";
 export const loadSheet = cache(async (orgSlug: string, projectId: string, sheetId: string) => {
   const { org, can } = await requireOrg(orgSlug);
   if (!isUuid(projectId) || !isUuid(sheetId)) notFound();
-  const sheet = await getSheet({ orgId: org.orgId, projectId }, sheetId).catch((e) => {
+  const sheet = await sheetOf({ orgId: org.orgId, projectId }, sheetId).catch((e) => {
     if (e instanceof AppError && e.status === 404) notFound();
     throw e;
   });

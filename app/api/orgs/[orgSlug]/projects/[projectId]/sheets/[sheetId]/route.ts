@@ -1,6 +1,6 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId]/sheets/[sheetId] — one sheet; PATCH — label, unit type, count role, scale, calibration; DELETE ?version=N[&tags=N] — remove it and its tags
 import { NextResponse } from "next/server";
-import { deleteSheet, getSheet, updateSheet } from "@/db/queries/sheets";
+import { editSheet, removeSheet, sheetOf } from "@/lib/server/plans/sheets";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { readConfirmedTags } from "@/lib/api/read-confirm";
@@ -11,7 +11,7 @@ type Params = { orgSlug: string; projectId: string; sheetId: string };
 
 export const GET = withOrg<Params>(
   async ({ params, org }) =>
-    NextResponse.json({ sheet: await getSheet(projectScope(org, params), parseId(params.sheetId, "sheet")) }),
+    NextResponse.json({ sheet: await sheetOf(projectScope(org, params), parseId(params.sheetId, "sheet")) }),
   { permission: "plans.read" },
 );
 
@@ -19,14 +19,14 @@ export const PATCH = withOrg<Params>(
   async ({ req, params, org }) => {
     const scope = projectScope(org, params);
     const id = parseId(params.sheetId, "sheet");
-    return NextResponse.json({ sheet: await updateSheet(scope, id, await readJson(req, sheetUpdateSchema)) });
+    return NextResponse.json({ sheet: await editSheet(scope, id, await readJson(req, sheetUpdateSchema)) });
   },
   { permission: "plans.write" },
 );
 
 export const DELETE = withOrg<Params>(
   async ({ req, params, org }) => {
-    await deleteSheet(projectScope(org, params), parseId(params.sheetId, "sheet"), readVersion(req), readConfirmedTags(req));
+    await removeSheet(projectScope(org, params), parseId(params.sheetId, "sheet"), readVersion(req), readConfirmedTags(req));
     return new NextResponse(null, { status: 204 });
   },
   { permission: "plans.write" },

@@ -1,6 +1,6 @@
 // PATCH /api/orgs/[orgSlug]/projects/[projectId]/tags/[tagId] — move, retype, re-measure (version-checked); DELETE ?version=N
 import { NextResponse } from "next/server";
-import { deleteTag, updateTag } from "@/db/queries/tags";
+import { editTag, removeTag } from "@/lib/server/plans/tags";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { parseId, readJson, readVersion } from "@/lib/api/read-input";
@@ -12,14 +12,14 @@ export const PATCH = withOrg<Params>(
   async ({ req, params, org }) => {
     const scope = projectScope(org, params);
     const id = parseId(params.tagId, "tag");
-    return NextResponse.json({ tag: await updateTag(scope, id, await readJson(req, tagUpdateSchema)) });
+    return NextResponse.json({ tag: await editTag(scope, id, await readJson(req, tagUpdateSchema)) });
   },
   { permission: "plans.write" },
 );
 
 export const DELETE = withOrg<Params>(
   async ({ req, params, org }) => {
-    await deleteTag(projectScope(org, params), parseId(params.tagId, "tag"), readVersion(req));
+    await removeTag(projectScope(org, params), parseId(params.tagId, "tag"), readVersion(req));
     return new NextResponse(null, { status: 204 });
   },
   { permission: "plans.write" },

@@ -1,24 +1,16 @@
 // GET /api/orgs/[orgSlug]/projects/[projectId]/plan-sets/[planSetId]/file — the PDF, for members of the project's organisation only
-import { getPlanSetFile } from "@/db/queries/plan-sets";
 import { withOrg } from "@/lib/api/with-org";
 import { projectScope } from "@/lib/api/project-scope";
 import { parseId } from "@/lib/api/read-input";
-import { AppError } from "@/lib/errors";
-import { fetchStoredFile } from "@/lib/uploads/file-store";
+import { openPlanSetFile } from "@/lib/server/plans/plan-sets";
 
 type Params = { orgSlug: string; projectId: string; planSetId: string };
 
 export const GET = withOrg<Params>(
   async ({ req, params, org }) => {
-    const { fileKey, name } = await getPlanSetFile(projectScope(org, params), parseId(params.planSetId, "plan set"));
     // Ranges pass through, so pdf.js can show page 1 of a large set before the rest arrives.
-    const unavailable = () => new AppError(503, "The plan file is not available right now. Try again shortly.");
-    const stored = await fetchStoredFile(fileKey, req.headers.get("range")).catch((error) => {
-      console.error("file store", fileKey, error);
-      throw unavailable();
-    });
+    const { stored, name } = await openPlanSetFile(projectScope(org, params), parseId(params.planSetId, "plan set"), req.headers.get("range"));
     if (stored.status === 416) return new Response(null, { status: 416, headers: passThrough(stored, ["content-range"]) });
-    if (!stored.ok || !stored.body) throw unavailable();
     return new Response(stored.body, {
       status: stored.status === 206 ? 206 : 200,
       headers: {

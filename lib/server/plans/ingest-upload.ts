@@ -1,9 +1,9 @@
 import { createHash } from "node:crypto";
 import { claimPendingUpload, isFileKeyInUse } from "@/db/queries/pending-uploads";
-import { createPlanSet } from "@/db/queries/plan-sets";
 import { inspectPdf, isPdfRejected } from "@/lib/pdf/inspect";
 import { deleteStoredFiles, fetchStoredFile } from "@/lib/uploads/file-store";
-import type { PlanUploadResult } from "./api-types";
+import type { PlanUploadResult } from "@/lib/plans/api-types";
+import { addPlanSet } from "./plan-sets";
 
 export const UNEXPECTED_UPLOAD = "This upload was not started here, or it has already been handled.";
 
@@ -24,7 +24,7 @@ export async function ingestPlanUpload(file: { key: string; name: string; size: 
     const inspection = await inspectPdf(bytes);
     // The digest of the bytes as read back (not as the browser claimed), so a second upload of one file can be recognised.
     const contentHash = createHash("sha256").update(bytes).digest("hex");
-    const planSetId = await createPlanSet(scope, { key: file.key, name: file.name, size: bytes.byteLength, contentHash }, inspection.pages);
+    const planSetId = await addPlanSet(scope, { key: file.key, name: file.name, size: bytes.byteLength, contentHash }, inspection.pages);
     return { ok: true, planSetId, pageCount: inspection.pageCount };
   } catch (error) {
     await discardUnlessOwned(file.key);

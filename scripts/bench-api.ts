@@ -13,7 +13,7 @@ import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { signUpUser } from "@/db/queries/users";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
-import { testPrices } from "@/lib/takeoffs/fixtures";
+import { testPrices } from "@/takeoff/testing/job-fixtures";
 
 const base = process.env.NEXTAUTH_URL!;
 const UNITS: Record<string, number> = { "Type A": 150, "Type B": 100, "Type C": 50 }; // 300 units

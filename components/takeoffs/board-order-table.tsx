@@ -1,7 +1,7 @@
 import { Fragment } from "react";
 import { count, feet, inchesText, stockLength, usd } from "@/lib/takeoffs/format";
 import { MATERIAL_LABELS } from "@/lib/takeoffs/labels";
-import type { BoardOrder } from "@/lib/takeoffs/types";
+import type { BoardOrder } from "@/takeoff";
 
 const TH = "px-2 py-1.5 font-semibold";
 const TD = "num whitespace-nowrap px-2 py-1";

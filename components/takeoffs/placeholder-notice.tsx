@@ -1,4 +1,4 @@
-import type { TakeoffResult } from "@/lib/takeoffs/types";
+import type { TakeoffResult } from "@/takeoff";
 
 /** A takeoff priced partly with placeholders says so at the top, with what is missing and how each was priced. */
 export function PlaceholderNotice({ result }: { result: TakeoffResult }) {

@@ -8,7 +8,7 @@ import type { OpeningTypeView } from "@/lib/plans/api-types";
 import type { OpeningTypeCreateInput, OpeningTypeUpdateInput } from "@/lib/validators/plans";
 import { trimSpecSchema, wallSetback, type TrimSpec, type WallBuildUp } from "@/takeoff";
 import { getCounts } from "./counts";
-import { checkOpening } from "@/lib/takeoffs/opening-check";
+import { checkOpening } from "@/takeoff";
 import { assertProject, type ProjectScope } from "./project-scope";
 import { requireConfirmed } from "./removal-impact";
 

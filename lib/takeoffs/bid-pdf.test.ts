@@ -1,6 +1,6 @@
 import { expect, it } from "vitest";
-import { computeTakeoff } from "./compute";
-import { testInputs, testPrices } from "./fixtures";
+import { computeTakeoff } from "@/takeoff";
+import { testInputs, testPrices } from "@/takeoff/testing/job-fixtures";
 import { bidSummaryPdf } from "./bid-pdf";
 
 /** Reads a page's text back with pdf.js, the reader the product already ships. */

@@ -1,5 +1,5 @@
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf-lib";
-import type { TakeoffResult } from "./types";
+import type { TakeoffResult } from "@/takeoff";
 
 export interface BidDocument {
   orgName: string;

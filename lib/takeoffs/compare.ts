@@ -1,5 +1,5 @@
 import { formatLength, formatLengthExact, MATERIALS, type Material } from "@/takeoff";
-import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "./types";
+import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/takeoff";
 
 export interface ComparedTakeoff {
   id: string;

@@ -6,7 +6,7 @@ import { db } from "@/db/client";
 import { priceBookItems, takeoffs, type Role } from "@/db/schema";
 import { createOpeningType } from "@/db/queries/opening-types";
 import { createTag } from "@/db/queries/tags";
-import { computeTakeoff } from "@/lib/takeoffs/compute";
+import { computeTakeoff } from "@/takeoff";
 import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";

@@ -19,6 +19,7 @@ export { cutList } from "./cut-list";
 export { takeoffTotals } from "./totals";
 export { pieceDemand, MATERIALS, type PieceDemand } from "./demand";
 export { planStock } from "./stock-plan/plan-stock";
+export { dollarsToCents } from "./exact";
 export { parseLength } from "./length-parse";
 export { formatLength, formatLengthExact, type LengthStyle } from "./length-format";
 export { bidTotal, labourCost, labourMinutes, type Bid, type BidRates, type LabourRates } from "./pricing";

@@ -41,6 +41,7 @@ export {
 
 // A whole job from its snapshots: what a takeoff run executes and what a saved takeoff stores.
 export { computeTakeoff } from "./job/compute";
+export { materialCost } from "./job/materials";
 export { MissingItem, OpeningTypeProblem, PriceGaps } from "./job/errors";
 export { assessOpeningType, type Assessment, type OpeningTypeInput, type PriceGap } from "./job/price-gaps";
 export { checkOpening, type OpeningProblem } from "./job/opening-check";

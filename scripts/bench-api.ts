@@ -13,7 +13,8 @@ import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
-import { testPrices } from "@/lib/takeoffs/fixtures";
+import { usd } from "@/lib/takeoffs/format";
+import { testPrices } from "@/takeoff/testing/job-fixtures";
 
 const base = process.env.NEXTAUTH_URL!;
 const UNITS: Record<string, number> = { "Type A": 150, "Type B": 100, "Type C": 50 }; // 300 units
@@ -65,5 +66,5 @@ const run = await load("POST …/takeoffs (run + save)", {
 await pool.end();
 
 const ratio = (r: typeof trivial) => ({ ...r, "req/s vs trivial": `${((r["req/s"] / trivial["req/s"]) * 100).toFixed(1)}%`, "p50 vs trivial": `${(r["p50 ms"] / Math.max(1, trivial["p50 ms"])).toFixed(1)}×` });
-console.log(`\nAPI benchmark — job of ${Object.values(UNITS).reduce((a, b) => a + b, 0)} units, ${takeoff.result.openingsTotal} openings (bid ${takeoff.result.bid.total.toLocaleString("en-US", { style: "currency", currency: "USD" })}); 20 connections × 10 s each, loopback, next start\n`);
+console.log(`\nAPI benchmark — job of ${Object.values(UNITS).reduce((a, b) => a + b, 0)} units, ${takeoff.result.openingsTotal} openings (bid ${usd(takeoff.result.bid.total)}); 20 connections × 10 s each, loopback, next start\n`);
 console.table([ratio(trivial), ratio(results), ratio(run)]);

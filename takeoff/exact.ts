@@ -78,6 +78,14 @@ export function roundToCents(f: Fraction): Fraction {
   return new Fraction(floorDiv(200n * numer(f) + f.d, 2n * f.d), 100n);
 }
 
+/**
+ * Dollars to the cent, half up, reading x as the decimal it prints as: 1.005 is $1.01, where
+ * Math.round(1.005 * 100) gives 100 because 1.005 * 100 is 100.49999999999999 in binary floating point.
+ */
+export function dollarsToCents(x: number): number {
+  return roundToCents(exact(x)).valueOf();
+}
+
 export function sumFractions(values: Iterable<Fraction>): Fraction {
   let total = new Fraction(0);
   for (const v of values) total = total.add(v);

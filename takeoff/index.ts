@@ -19,10 +19,10 @@ export { cutList } from "./cut-list";
 export { takeoffTotals } from "./totals";
 export { pieceDemand, MATERIALS, type PieceDemand } from "./demand";
 export { planStock } from "./stock-plan/plan-stock";
-export { orderMaterials, summarizeOrders, type MaterialOrder, type MaterialOrderSummary, type StockCatalog } from "./order";
+export { dollarsToCents } from "./exact";
 export { parseLength } from "./length-parse";
 export { formatLength, formatLengthExact, type LengthStyle } from "./length-format";
-export { bidTotal, labourCost, labourMinutes, materialCost, type Bid, type BidRates, type LabourRates } from "./pricing";
+export { bidTotal, labourCost, labourMinutes, type Bid, type BidRates, type LabourRates } from "./pricing";
 export { wallSetback, wallBuildUpSchema, type WallBuildUp } from "./wall-build-up";
 export { DRESSED_LUMBER, GYPSUM_BOARD_THICKNESS, type GypsumBoard, type NominalLumber, type StudSize } from "./nominal-sizes";
 export { TRIM_DEFAULTS } from "./trim-defaults";
@@ -38,3 +38,21 @@ export {
   takeoffLineSchema,
   trimSpecSchema,
 } from "./schemas";
+
+// A whole job from its snapshots: what a takeoff run executes and what a saved takeoff stores.
+export { computeTakeoff } from "./job/compute";
+export { materialCost } from "./job/materials";
+export { MissingItem, OpeningTypeProblem, PriceGaps } from "./job/errors";
+export { assessOpeningType, type Assessment, type OpeningTypeInput, type PriceGap } from "./job/price-gaps";
+export { checkOpening, type OpeningProblem } from "./job/opening-check";
+export type {
+  BoardOrder,
+  MaterialSummary,
+  OpeningTypeResult,
+  PlaceholderLine,
+  PriceItemSnapshot,
+  TakeoffInputs,
+  TakeoffPrices,
+  TakeoffResult,
+  TakeoffSettings,
+} from "./job/types";

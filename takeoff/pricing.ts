@@ -1,5 +1,5 @@
 import { jobPieces } from "./demand";
-import { exact, Fraction, roundToCents, sumFractions } from "./exact";
+import { exact, Fraction, roundToCents } from "./exact";
 import { bidRatesSchema, labourRatesSchema } from "./schemas";
 import type { Style, TakeoffLine } from "./types";
 import { parseOrThrow } from "./validate";
@@ -31,11 +31,6 @@ export interface Bid {
 }
 
 const cents = (f: Fraction) => roundToCents(f).valueOf();
-
-/** Material cost of a set of board orders, in cents. */
-export function materialCost(orders: readonly { plan: { cost: number } }[]): number {
-  return cents(sumFractions(orders.map((o) => exact(o.plan.cost))));
-}
 
 function exactLabourMinutes(lines: readonly TakeoffLine[], rates: LabourRates): Fraction {
   const r = parseOrThrow(labourRatesSchema, rates, "rates");

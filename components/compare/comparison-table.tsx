@@ -1,9 +1,10 @@
 import { MATERIALS } from "@/takeoff";
 import type { ComparisonColumn } from "@/lib/takeoffs/compare";
+import { usd } from "@/lib/takeoffs/format";
 import { Card } from "@/components/ui/card";
 import { LockMark } from "@/components/ui/lock-mark";
 
-const usd = (x: number | null) => (x === null ? "—" : x.toLocaleString("en-US", { style: "currency", currency: "USD" }));
+const money = (x: number | null) => (x === null ? "—" : usd(x));
 const num = (x: number, digits = 0) => x.toLocaleString("en-US", { maximumFractionDigits: digits, minimumFractionDigits: digits });
 
 type Row = { label: string; value: (c: ComparisonColumn) => number | null; show: (x: number | null) => string };
@@ -13,14 +14,14 @@ const rows: Row[] = [
   ...MATERIALS.flatMap((m): Row[] => [
     { label: `${m[0]!.toUpperCase()}${m.slice(1)} — linear ft`, value: (c) => c.materials[m]?.linearFeet ?? 0, show: (x) => num(x ?? 0, 1) },
     { label: `${m[0]!.toUpperCase()}${m.slice(1)} — boards to buy`, value: (c) => c.materials[m]?.boards ?? 0, show: (x) => num(x ?? 0) },
-    { label: `${m[0]!.toUpperCase()}${m.slice(1)} — cost`, value: (c) => c.materials[m]?.cost ?? 0, show: usd },
+    { label: `${m[0]!.toUpperCase()}${m.slice(1)} — cost`, value: (c) => c.materials[m]?.cost ?? 0, show: money },
   ]),
-  { label: "Material", value: (c) => c.material, show: usd },
+  { label: "Material", value: (c) => c.material, show: money },
   { label: "Labour hours", value: (c) => c.labourHours, show: (x) => num(x ?? 0, 1) },
-  { label: "Labour", value: (c) => c.labour, show: usd },
-  { label: "Bid total", value: (c) => c.bidTotal, show: usd },
-  { label: "Per opening", value: (c) => c.perOpening, show: usd },
-  { label: "Per unit", value: (c) => c.perUnit, show: usd },
+  { label: "Labour", value: (c) => c.labour, show: money },
+  { label: "Bid total", value: (c) => c.bidTotal, show: money },
+  { label: "Per opening", value: (c) => c.perOpening, show: money },
+  { label: "Per unit", value: (c) => c.perUnit, show: money },
 ];
 
 /** Side by side against the first takeoff; a changed figure shows its arrow and difference in words, not by colour alone. */

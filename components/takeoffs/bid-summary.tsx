@@ -1,5 +1,5 @@
 import { hours, usd } from "@/lib/takeoffs/format";
-import type { TakeoffPrices, TakeoffResult } from "@/lib/takeoffs/types";
+import type { TakeoffPrices, TakeoffResult } from "@/takeoff";
 
 const pct = (fraction: number) => `${+(fraction * 100).toFixed(3)} %`;
 

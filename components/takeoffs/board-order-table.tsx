@@ -1,7 +1,7 @@
 import { Fragment } from "react";
 import { count, feet, inchesText, stockLength, usd } from "@/lib/takeoffs/format";
 import { MATERIAL_LABELS } from "@/lib/takeoffs/labels";
-import type { BoardOrder } from "@/lib/takeoffs/types";
+import { materialCost, type BoardOrder } from "@/takeoff";
 
 const TH = "px-2 py-1.5 font-semibold";
 const TD = "num whitespace-nowrap px-2 py-1";
@@ -10,7 +10,7 @@ const planned = (o: BoardOrder, length: number) => o.plan.boards.filter((b) => b
 
 /** What to buy: per price-book item (and rip width), boards per stock length with the allowance, at the snapshot's prices. */
 export function BoardOrderTable({ orders }: { orders: BoardOrder[] }) {
-  const total = orders.reduce((t, o) => t + o.toBuy.reduce((s, b) => s + b.count * b.price, 0), 0);
+  const total = materialCost(orders);
   const boards = orders.reduce((t, o) => t + o.toBuy.reduce((s, b) => s + b.count, 0), 0);
   return (
     <div className="relative overflow-x-auto rounded-lg border border-maple-200 bg-white">

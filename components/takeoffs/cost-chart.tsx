@@ -1,6 +1,6 @@
 import { costBreakdown, layoutBar, type SegmentKey } from "@/lib/takeoffs/cost-breakdown";
 import { ratioPercent, usd } from "@/lib/takeoffs/format";
-import type { TakeoffResult } from "@/lib/takeoffs/types";
+import type { TakeoffResult } from "@/takeoff";
 
 const WIDTH = 960;
 const BAR = 40;

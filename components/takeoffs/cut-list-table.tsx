@@ -1,6 +1,6 @@
 import { count, inchesText, tapeLength } from "@/lib/takeoffs/format";
 import { PART_LABELS } from "@/lib/takeoffs/labels";
-import type { OpeningTypeResult } from "@/lib/takeoffs/types";
+import type { OpeningTypeResult } from "@/takeoff";
 import { EndsCell } from "./end-glyph";
 
 const TH = "px-1.5 py-1.5 font-semibold";

@@ -1,6 +1,6 @@
 import { count, feet, ratioPercent, usd } from "@/lib/takeoffs/format";
 import { MATERIAL_LABELS } from "@/lib/takeoffs/labels";
-import type { TakeoffResult } from "@/lib/takeoffs/types";
+import type { TakeoffResult } from "@/takeoff";
 
 const TH = "px-2 py-1.5 text-right font-semibold";
 const TD = "num whitespace-nowrap px-2 py-1";

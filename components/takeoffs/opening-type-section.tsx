@@ -1,7 +1,7 @@
 import { elevation } from "@/lib/takeoffs/elevation";
 import { count, inchesText, tapeLength } from "@/lib/takeoffs/format";
 import { STYLE_NAMES } from "@/lib/takeoffs/labels";
-import type { OpeningTypeResult, PriceItemSnapshot } from "@/lib/takeoffs/types";
+import type { OpeningTypeResult, PriceItemSnapshot } from "@/takeoff";
 import { CutListTable } from "./cut-list-table";
 import { ElevationDrawing } from "./elevation-drawing";
 

@@ -1,4 +1,5 @@
-import type { TakeoffResult } from "@/lib/takeoffs/types";
+import { usd } from "@/lib/takeoffs/format";
+import type { TakeoffResult } from "@/takeoff";
 
 /** A takeoff priced partly with placeholders says so at the top, with what is missing and how each was priced. */
 export function PlaceholderNotice({ result }: { result: TakeoffResult }) {
@@ -10,7 +11,7 @@ export function PlaceholderNotice({ result }: { result: TakeoffResult }) {
       <ul className="mt-1 list-disc space-y-1 pl-5">
         {placeholders.map((p) => (
           <li key={p.itemId}>
-            {p.itemName.replace(/^PLACEHOLDER /, "")} for {p.marks.join(", ")}: priced {p.basis} (${p.pricePerFoot.toFixed(2)}/ft).
+            {p.itemName.replace(/^PLACEHOLDER /, "")} for {p.marks.join(", ")}: priced {p.basis} ({usd(p.pricePerFoot)}/ft).
           </li>
         ))}
       </ul>

@@ -1,7 +1,7 @@
 import type { MaterialTotal } from "@/takeoff";
 import { count, feet } from "@/lib/takeoffs/format";
 import { MATERIAL_LABELS } from "@/lib/takeoffs/labels";
-import type { TakeoffResult } from "@/lib/takeoffs/types";
+import type { TakeoffResult } from "@/takeoff";
 
 const TH = "px-2 py-1.5 font-semibold";
 const TD = "num px-2 py-1";

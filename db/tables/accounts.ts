@@ -1,7 +1,7 @@
 import { sql } from "drizzle-orm";
 import { check, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid, type AnyPgColumn } from "drizzle-orm/pg-core";
 import type { TrimSpec } from "@/takeoff";
-import type { TakeoffSettings } from "@/lib/takeoffs/types";
+import type { TakeoffSettings } from "@/takeoff";
 import { createdAt } from "./common";
 
 export const roleEnum = pgEnum("member_role", ["admin", "estimator", "project_manager"]);

@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import { index, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
-import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/lib/takeoffs/types";
+import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/takeoff";
 import { createdAt } from "./common";
 import { organisations, users } from "./accounts";
 import { projects } from "./projects";

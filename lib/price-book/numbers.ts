@@ -2,6 +2,8 @@
  * Money, minutes and percentages as people type them. Decimal text is read digit by digit so "8.25" %
  * becomes exactly the double nearest 0.0825 — the same number the engine would get from a typed 0.0825.
  */
+import { usd } from "@/lib/takeoffs/format";
+
 export type NumberRead = { ok: true; value: number } | { ok: false; message: string };
 
 const DECIMAL = /^(\d+)(?:\.(\d*))?$|^\.(\d+)$/;
@@ -51,10 +53,8 @@ export function readDecimal(input: number | string, rules: DecimalRules): Number
 const decimalsMessage = (label: string, decimals: number, dollars?: boolean) =>
   dollars && decimals === 2 ? `${label} must be in dollars and cents (at most 2 decimals).` : `${label} must have at most ${decimals} decimals.`;
 
-const usd = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD", minimumFractionDigits: 2 });
-
-/** $1,234.50 */
-export const formatMoney = (dollars: number) => usd.format(dollars);
+/** $1,234.50: the one money formatter (lib/takeoffs/format.ts), under the name the price-book code calls it by. */
+export const formatMoney = usd;
 
 /** 14.2 → "14.20": how prices are written into CSV cells and edit boxes (no "$", no thousands commas). */
 export const moneyText = (dollars: number) => dollars.toFixed(2);

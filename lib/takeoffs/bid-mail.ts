@@ -1,7 +1,7 @@
 import { escapeHtml } from "@/lib/mail/escape-html";
 import type { Mail } from "@/lib/mail/transport";
+import { usd } from "./format";
 
-const usd = (x: number) => x.toLocaleString("en-US", { style: "currency", currency: "USD" });
 
 export function bidMail(a: { to: string; orgName: string; projectName: string; senderName: string; message: string | null; total: number }): Omit<Mail, "attachments"> {
   const subject = `Window trim bid — ${a.projectName} — ${a.orgName}`;

@@ -1,7 +1,8 @@
 import { expect, it } from "vitest";
-import { computeTakeoff } from "./compute";
-import { testInputs, testPrices } from "./fixtures";
+import { computeTakeoff } from "@/takeoff";
+import { testInputs, testPrices } from "@/takeoff/testing/job-fixtures";
 import { bidSummaryPdf } from "./bid-pdf";
+import { usd } from "./format";
 
 /** Reads a page's text back with pdf.js, the reader the product already ships. */
 async function pdfText(bytes: Uint8Array) {
@@ -71,4 +72,16 @@ it("a takeoff priced with placeholders prints as a draft, naming each placeholde
   expect(text).toContain("Bid total (with placeholder prices)");
   const clean = await pdfText(await bidSummaryPdf({ ...doc, result: await computeTakeoff(testInputs(), testPrices()) }));
   expect(clean).not.toContain("DRAFT");
+});
+
+it("prints money through the one formatter: to the cent, thousands separated, never -$0.00", async () => {
+  const computed = await computeTakeoff(testInputs(), testPrices());
+  // A remainder below half a cent either side of zero prints as $0.00 (toLocaleString wrote -$0.00).
+  const result = { ...computed, bid: { ...computed.bid, markup: -0.001, tax: 1.005, total: 1234567.5 } };
+  const doc = { orgName: "Birchmoor", project: { name: "Job", generalContractor: null, bidDue: null }, takeoffName: "t", priceBookName: "b", pricesAsOf: new Date(), issuedAt: new Date(), validDays: 30 };
+  const text = await pdfText(await bidSummaryPdf({ ...doc, result }));
+  expect(text).not.toContain("-$0.00");
+  expect(text).toContain("$1.01");
+  expect(text).toContain("$1,234,567.50");
+  expect(text).toContain(usd(result.bid.material));
 });

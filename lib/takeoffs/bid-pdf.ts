@@ -1,5 +1,6 @@
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf-lib";
-import type { TakeoffResult } from "./types";
+import type { TakeoffResult } from "@/takeoff";
+import { usd } from "./format";
 
 export interface BidDocument {
   orgName: string;
@@ -15,7 +16,6 @@ export interface BidDocument {
 // The standard PDF fonts speak WinAnsi only; anything else a person typed prints as "?" rather than failing.
 const WIN_ANSI_EXTRA = "€‚ƒ„…†‡ˆ‰Š‹ŒŽ‘’“”•–—˜™š›œžŸ";
 const safe = (t: string) => [...t].map((c) => ((c >= " " && c <= "~") || (c >= "\u00a0" && c <= "\u00ff") || WIN_ANSI_EXTRA.includes(c) ? c : "?")).join("");
-const usd = (x: number) => x.toLocaleString("en-US", { style: "currency", currency: "USD" });
 const day = (d: Date) => d.toLocaleDateString("en-US", { year: "numeric", month: "long", day: "numeric", timeZone: "UTC" });
 
 const SPRUCE = rgb(0.14, 0.345, 0.251);

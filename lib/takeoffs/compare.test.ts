@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { computeTakeoff } from "./compute";
+import { computeTakeoff } from "@/takeoff";
 import { column, explainDifferences, type ComparedTakeoff } from "./compare";
-import { testInputs, testPrices } from "./fixtures";
-import type { TakeoffInputs, TakeoffPrices } from "./types";
+import { testInputs, testPrices } from "@/takeoff/testing/job-fixtures";
+import type { TakeoffInputs, TakeoffPrices } from "@/takeoff";
 
 async function takeoff(name: string, inputs: TakeoffInputs, prices: TakeoffPrices): Promise<ComparedTakeoff> {
   return { id: name, name, projectName: "Larkspur", status: "draft", createdAt: new Date(), inputs, prices, result: await computeTakeoff(inputs, prices) };

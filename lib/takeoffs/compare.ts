@@ -1,5 +1,6 @@
 import { formatLength, formatLengthExact, MATERIALS, type Material } from "@/takeoff";
-import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "./types";
+import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/takeoff";
+import { usd } from "./format";
 
 export interface ComparedTakeoff {
   id: string;
@@ -29,7 +30,6 @@ export interface ComparisonColumn {
 }
 
 const ft = (inches: number) => formatLength(inches, { style: "feet-inches" });
-const usd = (x: number) => x.toLocaleString("en-US", { style: "currency", currency: "USD" });
 const pct = (x: number) => `${(x * 100).toFixed(2).replace(/\.?0+$/, "")}%`;
 
 export function column(t: ComparedTakeoff): ComparisonColumn {

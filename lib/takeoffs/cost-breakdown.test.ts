@@ -1,9 +1,9 @@
 import { beforeAll, describe, expect, it } from "vitest";
-import { computeTakeoff } from "./compute";
+import { computeTakeoff } from "@/takeoff";
 import { costBreakdown, layoutBar } from "./cost-breakdown";
 import { textWidth } from "./elevation-callouts";
-import { testInputs, testPrices } from "./fixtures";
-import type { TakeoffResult } from "./types";
+import { testInputs, testPrices } from "@/takeoff/testing/job-fixtures";
+import type { TakeoffResult } from "@/takeoff";
 
 let result: TakeoffResult;
 beforeAll(async () => {

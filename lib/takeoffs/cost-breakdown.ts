@@ -2,7 +2,7 @@ import { MATERIALS, type Material } from "@/takeoff";
 import { textWidth } from "./elevation-callouts";
 import { usd } from "./format";
 import { MATERIAL_LABELS } from "./labels";
-import type { TakeoffResult } from "./types";
+import type { TakeoffResult } from "@/takeoff";
 
 export type SegmentKey = Material | "labour" | "markup" | "tax";
 

@@ -1,7 +1,7 @@
 import { expect, it } from "vitest";
-import { computeTakeoff } from "./compute";
+import { computeTakeoff } from "@/takeoff";
 import { crewCutList } from "./crew-cut-list";
-import { testInputs, testPrices } from "./fixtures";
+import { testInputs, testPrices } from "@/takeoff/testing/job-fixtures";
 
 it("groups by unit type then window type; per unit × units adds up to the job", async () => {
   const inputs = testInputs();

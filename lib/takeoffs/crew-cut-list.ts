@@ -1,5 +1,5 @@
 import type { CutPiece } from "@/takeoff";
-import type { TakeoffInputs, TakeoffResult } from "./types";
+import type { TakeoffInputs, TakeoffResult } from "@/takeoff";
 
 export interface CrewGroup {
   /** "Type A" … or "Common areas". */

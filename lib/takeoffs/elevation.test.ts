@@ -1,8 +1,8 @@
 import { beforeAll, describe, expect, it } from "vitest";
-import { computeTakeoff } from "./compute";
+import { computeTakeoff } from "@/takeoff";
 import { elevation, type DrawnPiece } from "./elevation";
-import { testInputs, testPrices } from "./fixtures";
-import type { OpeningTypeResult } from "./types";
+import { testInputs, testPrices } from "@/takeoff/testing/job-fixtures";
+import type { OpeningTypeResult } from "@/takeoff";
 
 const xs = (p: DrawnPiece) => p.points.map((q) => q.x);
 const ys = (p: DrawnPiece) => p.points.map((q) => q.y);

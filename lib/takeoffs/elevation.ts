@@ -1,7 +1,7 @@
 import { TRIM_DEFAULTS, type CutPiece, type Part } from "@/takeoff";
 import { placeCallouts, textWidth, type PlacedCallout } from "./elevation-callouts";
 import { PART_LABELS } from "./labels";
-import type { OpeningTypeResult, PriceItemSnapshot } from "./types";
+import type { OpeningTypeResult, PriceItemSnapshot } from "@/takeoff";
 
 /**
  * One window's trim as seen from the room, in inches, y downward, with the origin at the top-left corner of

@@ -9,6 +9,18 @@ describe("money and figures", () => {
     [0.005, "$0.01"],
     [-0.001, "$0.00"],
     [98765.432, "$98,765.43"],
+    [-12.5, "-$12.50"],
+    [-1234.567, "-$1,234.57"],
+    // Half up toward +∞, as the engine rounds money (roundToCents): −0.125 → −0.12.
+    [-0.125, "-$0.12"],
+    [0.125, "$0.13"],
+    // In binary floating point 1.005 × 100 is 100.49999999999999 and 0.145 × 100 is 14.499999999999998:
+    // Math.round(x * 100) printed $1.00 and $0.14.
+    [1.005, "$1.01"],
+    [0.145, "$0.15"],
+    [2.675, "$2.68"],
+    [1234567.894, "$1,234,567.89"],
+    [98765432109.995, "$98,765,432,110.00"],
   ])("usd(%s) = %s", (amount, text) => expect(usd(amount)).toBe(text));
 
   it("reads lengths like a tape, stock in whole feet", () => {

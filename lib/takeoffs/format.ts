@@ -1,13 +1,18 @@
-import { formatLength } from "@/takeoff";
+import { dollarsToCents, formatLength } from "@/takeoff";
 
 const dollars = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD", minimumFractionDigits: 2, maximumFractionDigits: 2 });
 const oneDecimal = new Intl.NumberFormat("en-US", { minimumFractionDigits: 1, maximumFractionDigits: 1 });
 const whole = new Intl.NumberFormat("en-US", { maximumFractionDigits: 0 });
 
-/** US dollars to the cent: $1,234.50. A rounding remainder never prints as "-$0.00". */
+/**
+ * US dollars to the cent: $1,234.50 — the one money formatter of the product (screens, bid PDF, mail,
+ * price book). Rounded half up the way the engine rounds money (dollarsToCents), so a figure reads the
+ * same wherever it is shown; a rounding remainder never prints as "-$0.00".
+ */
 export function usd(amount: number): string {
-  const cents = Math.round(amount * 100);
-  return dollars.format(cents === 0 ? 0 : cents / 100);
+  if (!Number.isFinite(amount)) return dollars.format(amount);
+  const rounded = dollarsToCents(amount);
+  return dollars.format(rounded === 0 ? 0 : rounded);
 }
 
 /** A cut length as read off a tape: 5'-2 5/8"; under a foot in inches alone (11/16", 7 1/2"), as a crew says it. */

@@ -1,7 +1,7 @@
 import { expect, it } from "vitest";
 import { parseCsv } from "@/lib/price-book/csv-grammar";
-import { computeTakeoff } from "./compute";
-import { testInputs, testPrices } from "./fixtures";
+import { computeTakeoff } from "@/takeoff";
+import { testInputs, testPrices } from "@/takeoff/testing/job-fixtures";
 import { orderCsv } from "./order-csv";
 
 it("writes item names and supplier codes a spreadsheet would run as formulas behind an apostrophe", async () => {

@@ -1,6 +1,6 @@
 import { formatLength } from "@/takeoff";
 import { writeCsv } from "@/lib/csv/write";
-import type { TakeoffResult } from "./types";
+import type { TakeoffResult } from "@/takeoff";
 
 const money = (x: number) => x.toFixed(2);
 

@@ -1,4 +1,4 @@
-import type { TakeoffSettings } from "./types";
+import type { TakeoffSettings } from "@/takeoff";
 
 /**
  * When a company has set none: a 1/8 in kerf, the width of a common thin-kerf miter-saw blade

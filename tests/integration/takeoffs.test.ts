@@ -6,7 +6,7 @@ import { db } from "@/db/client";
 import { priceBookItems, takeoffs, type Role } from "@/db/schema";
 import { addOpeningType as createOpeningType } from "@/lib/server/plans/opening-types";
 import { addTag as createTag } from "@/lib/server/plans/tags";
-import { computeTakeoff } from "@/lib/takeoffs/compute";
+import { computeTakeoff } from "@/takeoff";
 import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";

@@ -1,5 +1,5 @@
 import { fieldErrors, invalid } from "@/lib/errors";
-import { checkOpening } from "@/lib/takeoffs/opening-check";
+import { checkOpening } from "@/takeoff";
 import { trimSpecSchema, wallSetback, type TrimSpec, type WallBuildUp } from "@/takeoff";
 
 /** The spec as the engine will use it: organisation defaults under what was typed, checked by the engine's schema. */

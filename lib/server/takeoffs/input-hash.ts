@@ -1,5 +1,5 @@
 import { createHash } from "node:crypto";
-import type { TakeoffInputs, TakeoffPrices } from "@/lib/takeoffs/types";
+import type { TakeoffInputs, TakeoffPrices } from "@/takeoff";
 
 /**
  * Bumped whenever the engine can compute a different result from the same inputs (a new rounding, a

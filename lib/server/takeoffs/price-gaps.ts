@@ -3,7 +3,7 @@ import { defaultPriceBookId } from "@/db/queries/price-gaps";
 import type { ProjectScope } from "@/db/queries/project-scope";
 import { requireProject } from "@/lib/server/projects/require-project";
 import { getSettings } from "@/lib/server/settings/settings";
-import { assessOpeningType } from "@/lib/takeoffs/price-gaps";
+import { assessOpeningType } from "@/takeoff";
 import { snapshotPrices } from "./snapshot";
 
 export interface PriceGapsView {

@@ -1,5 +1,5 @@
 import { LRUCache } from "lru-cache";
-import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/lib/takeoffs/types";
+import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/takeoff";
 
 /**
  * A saved takeoff's snapshots (inputs, prices, result) as the JSON text the API sends. They never change

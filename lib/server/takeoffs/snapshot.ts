@@ -5,7 +5,7 @@ import { findPriceBookRow, listPriceBookItemRows } from "@/db/queries/takeoffs";
 import { listUnitTypes } from "@/db/queries/unit-types";
 import { invalid } from "@/lib/errors";
 import { getSettings } from "@/lib/server/settings/settings";
-import type { TakeoffInputs, TakeoffPrices } from "@/lib/takeoffs/types";
+import type { TakeoffInputs, TakeoffPrices } from "@/takeoff";
 
 /** The window list, unit types and counts as they are now, with the company's kerf and waste. */
 export async function snapshotInputs(s: ProjectScope, casingItemId: string | null, allowPlaceholders: boolean): Promise<TakeoffInputs> {

@@ -1,6 +1,6 @@
 import { db } from "@/db/client";
 import { priceBookItems, priceBooks } from "@/db/schema";
-import { testPrices } from "@/lib/takeoffs/fixtures";
+import { testPrices } from "@/takeoff/testing/job-fixtures";
 
 /** A price book whose items fit the world's windows (the same invented prices the unit tests use). */
 export async function addTestPriceBook(orgId: string) {

@@ -1,4 +1,4 @@
-import type { PriceItemSnapshot, TakeoffInputs, TakeoffPrices } from "./types";
+import type { PriceItemSnapshot, TakeoffInputs, TakeoffPrices } from "../job/types";
 
 /** Invented prices for tests: enough sizes for the fixtures' windows, not proportional to length. */
 export function testPrices(extra: PriceItemSnapshot[] = []): TakeoffPrices {

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { cutList } from "@/takeoff";
-import { computeTakeoff, MissingItem } from "./compute";
-import { testInputs, testPrices } from "./fixtures";
+import { cutList } from "../cut-list";
+import { testInputs, testPrices } from "../testing/job-fixtures";
+import { computeTakeoff } from "./compute";
+import { MissingItem } from "./errors";
 
 describe("computeTakeoff", () => {
   it("worked example, JLC 'Production Jamb Extensions': 3 1/2 in casing with 1/4 in reveals at jamb and stool → stool 8 in longer than the jamb opening", async () => {

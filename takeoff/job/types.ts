@@ -1,9 +1,11 @@
 /**
  * What a saved takeoff keeps: the inputs and prices as they were when it ran, and what the engine made
- * of them. Plain JSON (it lives in jsonb). Lengths in inches, money in dollars.
+ * of them. Plain JSON (it lives in jsonb). Lengths in inches, money in dollars: every money total of a
+ * result is an exact sum rounded once, half up, to the cent. Rows saved earlier must keep reading, so a
+ * field added later is optional.
  */
-import type { CutPiece, LabourRates, Material, MaterialTotal, StockPlan, TrimSpec } from "@/takeoff";
-import type { Bid } from "@/takeoff";
+import type { Bid, LabourRates } from "../pricing";
+import type { CutPiece, Material, MaterialTotal, StockPlan, TrimSpec } from "../types";
 
 export interface TakeoffSettings {
   /** Saw kerf taken by every cut. */
@@ -90,8 +92,12 @@ export interface PlaceholderLine {
 
 export interface MaterialSummary {
   material: Material;
+  /** Pieces cut; absent in takeoffs saved before it was recorded. */
+  pieces?: number;
   linearFeet: number;
   boardCount: number;
+  /** Optimised boards per stock length, longest first; absent in takeoffs saved before it was recorded. */
+  boards?: { stockLength: number; count: number }[];
   purchasedFeet: number;
   offcutFeet: number;
   /** Used length / purchased length of the optimised plan. */

@@ -1,4 +1,6 @@
-import { cutList, formatLength, type CutPiece, type Opening, type TrimSpec } from "@/takeoff";
+import { cutList } from "../cut-list";
+import { formatLength } from "../length-format";
+import type { CutPiece, Opening, TrimSpec } from "../types";
 
 /** A window whose sizes and trim spec cannot be cut: which field, and a sentence that says what would fix it. */
 export interface OpeningProblem {

@@ -1,12 +1,11 @@
-import { formatLength, type Material, type TrimSpec } from "@/takeoff";
+import { formatLength } from "../length-format";
+import type { Material, TrimSpec } from "../types";
 import type { PriceItemSnapshot } from "./types";
 
 /** Profiles are sold in nominal fractions; within 1/64 in two sizes are the same profile. */
 const SAME = 1 / 64;
 const near = (a: number, b: number) => Math.abs(a - b) < SAME;
 const size = (w: number, t: number) => `${formatLength(w)} × ${formatLength(t)}`;
-
-export class MissingItem extends Error {}
 
 /** A material one opening type needs that the price book cannot supply, in words, with the size it needs. */
 export interface ItemGap {
@@ -18,7 +17,7 @@ export interface ItemGap {
 }
 
 /** Dollars per inch at the item's best-value length: among equal candidates the cheaper one is picked. */
-export const unitPrice = (i: PriceItemSnapshot) => Math.min(...i.stock.map((s) => s.price / s.length));
+const unitPrice = (i: PriceItemSnapshot) => Math.min(...i.stock.map((s) => s.price / s.length));
 const byValue = (a: PriceItemSnapshot, b: PriceItemSnapshot) => unitPrice(a) - unitPrice(b) || a.name.localeCompare(b.name);
 
 const narrowestWideEnough = (items: PriceItemSnapshot[], width: number) =>
@@ -73,11 +72,4 @@ export function findItems(
     }
   }
   return { picked, gaps };
-}
-
-/** As findItems, but the first gap is refused (callers that cannot price with a placeholder). */
-export function pickItems(...args: Parameters<typeof findItems>): Partial<Record<Material, PriceItemSnapshot>> {
-  const { picked, gaps } = findItems(...args);
-  if (gaps[0]) throw new MissingItem(gaps[0].message);
-  return picked;
 }

@@ -1,6 +1,8 @@
-import { formatLength, type CutPiece, type Material, type TrimSpec } from "@/takeoff";
+import { exact, Fraction, roundToCents, toNumber } from "../exact";
+import { formatLength } from "../length-format";
+import type { CutPiece, Material, TrimSpec } from "../types";
 import { checkOpening, type OpeningProblem } from "./opening-check";
-import { findItems, unitPrice, type ItemGap } from "./pick-items";
+import { findItems, type ItemGap } from "./pick-items";
 import type { PriceItemSnapshot, TakeoffPrices } from "./types";
 
 const PART_NAMES: Record<CutPiece["part"], string> = {
@@ -95,6 +97,11 @@ export interface Placeholder {
   basis: string;
 }
 
+/** The item's rate per inch at its best-value length, exactly, so a stand-in price rounds once. */
+const exactRate = (i: PriceItemSnapshot) =>
+  i.stock.map((s) => exact(s.price).div(exact(s.length))).reduce((a, b) => (b.compare(a) < 0 ? b : a));
+const priceAt = (rate: Fraction, length: number) => toNumber(roundToCents(rate.mul(exact(length))));
+
 const placeholderKey = (g: PriceGap) => `${g.material}|${g.kind === "too-long" ? g.itemId : `${g.width}x${g.thickness}`}`;
 
 /**
@@ -111,7 +118,7 @@ export function placeholdersFor(gaps: PriceGap[], prices: TakeoffPrices, kerf: n
     const existing = out.get(key);
     if (existing) {
       const stock = existing.item.stock[0]!;
-      if (length > stock.length) existing.item.stock = [{ length, price: Math.round((stock.price / stock.length) * length * 100) / 100 }];
+      if (length > stock.length) existing.item.stock = [{ length, price: priceAt(exact(stock.price).div(exact(stock.length)), length) }];
       if (!existing.marks.includes(g.mark)) existing.marks.push(g.mark);
       existing.gaps.push(g.message);
       continue;
@@ -120,7 +127,7 @@ export function placeholdersFor(gaps: PriceGap[], prices: TakeoffPrices, kerf: n
     const like =
       (g.itemId ? prices.items.find((i) => i.id === g.itemId) : undefined) ??
       prices.items.filter((i) => kind.includes(i.kind)).sort((a, b) => Math.abs(a.faceWidth - g.width) - Math.abs(b.faceWidth - g.width))[0];
-    const rate = like ? unitPrice(like) : 0;
+    const rate = like ? exactRate(like) : new Fraction(0);
     out.set(key, {
       material: g.material,
       marks: [g.mark],
@@ -134,7 +141,7 @@ export function placeholdersFor(gaps: PriceGap[], prices: TakeoffPrices, kerf: n
         thickness: g.thickness,
         species: null,
         supplierCode: null,
-        stock: [{ length, price: Math.round(rate * length * 100) / 100 }],
+        stock: [{ length, price: priceAt(rate, length) }],
       },
     });
   }

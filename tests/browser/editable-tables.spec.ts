@@ -164,4 +164,22 @@ test("window list and price book cells: save, Escape, field errors, someone else
     await expect(cell(page, `Species / finish of ${ITEM}`).button).toHaveAccessibleName(`Species / finish of ${ITEM}: Primed FJ pine. Edit`);
     await expect(face.button).toHaveAccessibleName(new RegExp(`^Face of ${ITEM}: 2 1/2"?\\. Edit$`));
   });
+
+  await test.step("price book: the text filter and the kind choice narrow the list, and say so", async () => {
+    const status = page.getByRole("status").filter({ hasText: /^Showing/ });
+    // The filter bar is the innermost block holding the count (the new-item form has a Kind field too).
+    const bar = page.locator("div").filter({ has: status }).last();
+    await expect(status).toHaveText("Showing 10 of 10");
+    await bar.getByRole("searchbox", { name: /^Filter/ }).fill("c250-fj");
+    await expect(status).toHaveText("Showing 1 of 10");
+    await expect(price.button).toBeVisible();
+    await bar.getByRole("combobox", { name: /^Kind/ }).selectOption({ label: "Stool" });
+    await expect(status).toHaveText("Showing 0 of 10");
+    await expect(page.getByRole("cell", { name: "No items match the filter." })).toBeVisible();
+    await bar.getByRole("searchbox", { name: /^Filter/ }).fill("");
+    await expect(status).toHaveText("Showing 1 of 10");
+    await expect(page.getByRole("button", { name: /^Name of Stool 5 1\/4 bullnose/ })).toBeVisible();
+    await bar.getByRole("combobox", { name: /^Kind/ }).selectOption({ label: "All kinds" });
+    await expect(status).toHaveText("Showing 10 of 10");
+  });
 });

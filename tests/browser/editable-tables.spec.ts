@@ -5,26 +5,32 @@
  * save in between (409) shows the server's current row and says so.
  */
 import { expect, test, type Locator, type Page } from "@playwright/test";
+import { db } from "@/db/client";
+import { memberships, users } from "@/db/schema";
 import { createOpeningType } from "@/db/queries/opening-types";
 import { createProject } from "@/db/queries/projects";
 import { signUpUser } from "@/db/queries/users";
 import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
+import { hashPassword } from "@/lib/auth/password";
 import { openNav, openProject, openProjectSection, runId, signIn } from "./helpers";
 
 const id = runId();
 const password = "coped-stool-7777";
 const ITEM = "Casing 2 1/2 colonial — FJ pine";
 
-async function seed() {
-  const { user: admin, organisation } = await signUpUser({ name: "Reva Lindqvist", email: `reva.${id}@lindqvist-trim.test`, password, organisationName: `Lindqvist Trim ${id}` });
-  const projectName = `Birchmoor Lofts ${id}`;
+/** A company (`tag` keeps each test's apart) with an admin and a project manager, who reads both tables. */
+async function seed(tag: string) {
+  const { user: admin, organisation } = await signUpUser({ name: "Reva Lindqvist", email: `reva.${tag}.${id}@lindqvist-trim.test`, password, organisationName: `Lindqvist Trim ${tag} ${id}` });
+  const [manager] = await db.insert(users).values({ name: "Oskar Brandt", email: `oskar.${tag}.${id}@lindqvist-trim.test`, passwordHash: await hashPassword(password) }).returning();
+  await db.insert(memberships).values({ orgId: organisation.id, userId: manager!.id, role: "project_manager" });
+  const projectName = `Birchmoor Lofts ${tag} ${id}`;
   const project = await createProject({ orgId: organisation.id, userId: admin.id, input: { name: projectName } });
   const scope = { orgId: organisation.id, projectId: project.id, userId: admin.id };
   await createOpeningType(scope, { mark: "W1", width: 36, height: 60, setback: 0.5 });
   await createOpeningType(scope, { mark: "W2", width: 30, height: 48, setback: 0.5 });
   await seedDemoPriceBook(organisation.id, admin.id);
   // The pool stays open: later spec files in this worker seed through it too.
-  return { email: admin.email, slug: organisation.slug, projectName, projectId: project.id };
+  return { email: admin.email, managerEmail: manager!.email, slug: organisation.slug, projectName, projectId: project.id };
 }
 
 /** The cell's button (shown value) and, once open, its editor field. */
@@ -45,7 +51,7 @@ async function expectFieldError(page: Page, field: Locator, text: RegExp) {
 
 test("window list and price book cells: save, Escape, field errors, someone else's save", async ({ page }) => {
   test.setTimeout(180_000);
-  const world = await seed();
+  const world = await seed("edit");
   const api = (path: string) => `/api/orgs/${world.slug}/${path}`;
   const w1 = async () => {
     const { openingTypes } = await (await page.request.get(api(`projects/${world.projectId}/opening-types`))).json();
@@ -182,4 +188,30 @@ test("window list and price book cells: save, Escape, field errors, someone else
     await bar.getByRole("combobox", { name: /^Kind/ }).selectOption({ label: "All kinds" });
     await expect(status).toHaveText("Showing 10 of 10");
   });
+});
+
+test("a reader sees both tables without edit or delete buttons, empty and default values said in words", async ({ page }) => {
+  test.setTimeout(120_000);
+  const world = await seed("read");
+  await signIn(page, world.managerEmail, password);
+  await expect(page).toHaveURL(/\/projects$/);
+  await openProject(page, world.projectName);
+  await openProjectSection(page, "Window list");
+  const w2 = page.getByRole("row").filter({ hasText: /^W2/ });
+  await expect(w2).toBeVisible();
+  await expect(w2).toContainText("(default)");
+  // The empty notes cell: a dash to the eye, "none" to a screen reader.
+  await expect(w2.getByRole("cell").filter({ hasText: /^—none$/ })).toHaveCount(1);
+  await expect(page.getByRole("button", { name: /\. Edit$/ })).toHaveCount(0);
+  await expect(page.getByRole("button", { name: /^Delete / })).toHaveCount(0);
+  await expect(page.getByRole("columnheader", { name: "Actions" })).toHaveCount(0);
+  await expect(page.getByText("Your role can read the window list; estimators and admins edit it.")).toBeVisible();
+
+  await openNav(page, "Price books");
+  await page.getByRole("link", { name: /Alder Bend Millwork/ }).click();
+  await expect(page.getByRole("row").filter({ hasText: ITEM })).toBeVisible();
+  await expect(page.getByRole("button", { name: /\. Edit$/ })).toHaveCount(0);
+  await expect(page.getByRole("button", { name: /^Delete / })).toHaveCount(0);
+  await expect(page.getByRole("columnheader", { name: "Actions" })).toHaveCount(0);
+  await expect(page.getByRole("status").filter({ hasText: /^Showing/ })).toHaveText("Showing 10 of 10");
 });

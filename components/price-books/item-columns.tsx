@@ -1,47 +1,21 @@
 "use client";
 
-import {
-  columnFilteringFeature,
-  createColumnHelper,
-  createFilteredRowModel,
-  createSortedRowModel,
-  filterFn_equals,
-  filterFn_includesString,
-  globalFilteringFeature,
-  metaHelper,
-  rowSortingFeature,
-  sortFn_alphanumeric,
-  sortFn_basic,
-  tableFeatures,
-} from "@tanstack/react-table";
+import { deleteColumn, editableColumns } from "@/components/ui/editable-table/columns";
+import { DeleteRowButton } from "@/components/ui/delete-row-button";
 import { COLUMN_LABELS, priceColumnId, type ItemColumn } from "@/lib/price-book/item-edit";
 import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
 import type { PriceBookItemView } from "@/lib/price-book/types";
 import { ItemCell } from "./item-cell";
-import { ItemRowActions } from "./item-row-actions";
 
-type ColumnMeta = { align?: "end"; width?: string };
-
-export const features = tableFeatures({
-  rowSortingFeature,
-  columnFilteringFeature,
-  globalFilteringFeature,
-  sortedRowModel: createSortedRowModel(),
-  filteredRowModel: createFilteredRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic },
-  filterFns: { includesString: filterFn_includesString, equals: filterFn_equals },
-  columnMeta: metaHelper<ColumnMeta>(),
-});
-
-const helper = createColumnHelper<typeof features, PriceBookItemView>();
+const helper = editableColumns<PriceBookItemView>();
 
 const cell = (column: ItemColumn) =>
   function Cell({ row }: { row: { original: PriceBookItemView } }) {
     return <ItemCell row={row.original} column={column} />;
   };
 
-const text = (column: "name" | "species" | "supplierCode", width: string) =>
-  helper.accessor((r) => r[column] ?? "", { id: column, header: COLUMN_LABELS[column], sortFn: "alphanumeric", cell: cell(column), meta: { width } });
+const text = (column: "name" | "species" | "supplierCode", className: string) =>
+  helper.accessor((r) => r[column] ?? "", { id: column, header: COLUMN_LABELS[column], sortFn: "alphanumeric", cell: cell(column), meta: { className } });
 
 const size = (column: "faceWidth" | "thickness") =>
   helper.accessor(column, { id: column, header: COLUMN_LABELS[column], sortFn: "basic", enableGlobalFilter: false, cell: cell(column), meta: { align: "end" } });
@@ -68,11 +42,8 @@ export function buildColumns(lengths: number[]) {
         meta: { align: "end" },
       }),
     ),
-    helper.display({
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      enableSorting: false,
-      cell: ({ row }) => <ItemRowActions row={row.original} />,
-    }),
+    deleteColumn<PriceBookItemView>((row, { busy, onDelete }) => (
+      <DeleteRowButton what={row.name} question={`Delete "${row.name}" from this price book?`} busy={busy} onDelete={onDelete} />
+    )),
   ]);
 }

@@ -1,7 +1,7 @@
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
 import { priceBookItemUpdateSchema } from "@/lib/validators/price-book";
 import { itemDiff } from "./diff";
-import { KIND_LABELS } from "./kinds";
+import { KIND_LABELS, MATERIAL_KINDS } from "./kinds";
 import { sameLength, sizeText, stockLengthText } from "./length-text";
 import { formatMoney, moneyText } from "./numbers";
 import type { PriceBookItemView } from "./types";
@@ -22,6 +22,9 @@ export const COLUMN_LABELS: Record<TextColumn | "kind", string> = {
   species: "Species / finish",
   supplierCode: "Supplier code",
 };
+
+/** The kinds as `[value, name]` pairs, for the kind cell's editor and the table's kind filter. */
+export const KIND_OPTIONS = MATERIAL_KINDS.map((k) => [k, KIND_LABELS[k]] as const);
 
 export const priceColumnId = (inches: number): `price:${number}` => `price:${inches}`;
 export const priceColumnLength = (column: string): number | null => (column.startsWith("price:") ? Number(column.slice(6)) : null);

@@ -4,14 +4,10 @@ import { useState } from "react";
 import { ConfirmRemoval, RemovalSummary } from "@/components/plans/confirm-removal";
 import { Button } from "@/components/ui/button";
 import type { WindowListRow } from "./table-columns";
-import { useWindowListControls } from "./window-list-context";
 
 /** The row's delete: asks first, naming the tags and counted openings that go with the type. */
-export function RowActions({ row }: { row: WindowListRow }) {
-  const { canWrite, remove, removing } = useWindowListControls();
+export function RowActions({ row, busy, onDelete }: { row: WindowListRow; busy: boolean; onDelete: () => void }) {
   const [asking, setAsking] = useState(false);
-  if (!canWrite) return null;
-  const busy = removing === row.id;
   return (
     <>
       <Button look="danger" className="px-1.5 py-0.5 text-xs" title={`Delete ${row.mark}`} aria-label={`Delete ${row.mark}`} disabled={busy} onClick={() => setAsking(true)}>
@@ -24,7 +20,7 @@ export function RowActions({ row }: { row: WindowListRow }) {
         onCancel={() => setAsking(false)}
         onConfirm={() => {
           setAsking(false);
-          remove({ ...row, tags: row.tags });
+          onDelete();
         }}
       >
         <RemovalSummary tags={row.tags} openings={row.count} />

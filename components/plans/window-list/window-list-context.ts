@@ -1,35 +1,16 @@
 "use client";
 
-import { createContext, useContext } from "react";
+import { controlsContext, type EditableControls, type FieldErrors } from "@/components/ui/editable-table/context";
 import type { OpeningTypeView } from "@/lib/plans/api-types";
 import type { CellEdit } from "@/lib/plans/window-list/cell-patch";
 import type { EditableColumn } from "@/lib/plans/window-list/columns";
 
-export type RowNotice = { tone: "info" | "error"; text: string };
+export type { RowNotice } from "@/components/ui/editable-table/context";
 
-/**
- * What the table's cells need from the page. Column definitions live at module scope (TanStack Table
- * wants them stable), so the changing parts reach the cells through this context instead.
- */
-export interface WindowListControls {
-  canWrite: boolean;
-  editing: { rowId: string; column: EditableColumn } | null;
-  startEdit: (rowId: string, column: EditableColumn) => void;
-  /** Closes this cell's editor, unless another cell's has opened since (a save on blur ends late). */
-  stopEdit: (rowId: string, column: EditableColumn) => void;
+/** The editable table's controls for the window list; `remove` deletes the type and, as the person confirmed, its `tags` tags. */
+export interface WindowListControls extends EditableControls<OpeningTypeView & { tags?: number }, EditableColumn> {
   /** Resolves to the field errors to show (keyed like the API's), or null when the edit is done. */
-  commit: (row: OpeningTypeView, edit: CellEdit) => Promise<Record<string, string> | null>;
-  /** Deletes the type and, as the person confirmed, its `tags` tags. */
-  remove: (row: OpeningTypeView & { tags?: number }) => void;
-  removing: string | null;
-  notices: Record<string, RowNotice>;
-  dismiss: (rowId: string) => void;
+  commit: (row: OpeningTypeView, edit: CellEdit) => Promise<FieldErrors | null>;
 }
 
-export const WindowListContext = createContext<WindowListControls | null>(null);
-
-export function useWindowListControls(): WindowListControls {
-  const controls = useContext(WindowListContext);
-  if (!controls) throw new Error("Window list cells render inside <WindowListContext>.");
-  return controls;
-}
+export const [WindowListContext, useWindowListControls] = controlsContext<WindowListControls>("Window list cells render inside <WindowListContext>.");

@@ -7,9 +7,9 @@
 import { expect, test, type Locator, type Page } from "@playwright/test";
 import { db } from "@/db/client";
 import { memberships, users } from "@/db/schema";
-import { createOpeningType } from "@/db/queries/opening-types";
-import { createProject } from "@/db/queries/projects";
-import { signUpUser } from "@/db/queries/users";
+import { addOpeningType as createOpeningType } from "@/lib/server/plans/opening-types";
+import { createProject } from "@/lib/server/projects/projects";
+import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
 import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";
 import { openNav, openProject, openProjectSection, runId, signIn } from "./helpers";

@@ -2,6 +2,7 @@
  * Shapes the plans API answers with, shared by the route handlers and the client views.
  * Coordinates and page sizes are PDF user-space units (ISO 32000-1); lengths are inches.
  */
+import type { OpeningTypeValues } from "@/db/queries/opening-types";
 import type { TrimSpec, WallBuildUp } from "@/takeoff";
 
 export interface UnitTypeView {
@@ -60,15 +61,9 @@ export interface SheetView {
   version: number;
 }
 
-export interface OpeningTypeView {
+/** An opening type as the API sends it: the stored values with its id and version. */
+export interface OpeningTypeView extends OpeningTypeValues {
   id: string;
-  mark: string;
-  width: number;
-  height: number;
-  setback: number;
-  wallBuildUp: WallBuildUp | null;
-  trimSpec: TrimSpec;
-  notes: string | null;
   version: number;
 }
 

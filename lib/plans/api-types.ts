@@ -3,7 +3,6 @@
  * Coordinates and page sizes are PDF user-space units (ISO 32000-1); lengths are inches.
  */
 import type { OpeningTypeValues } from "@/db/queries/opening-types";
-import type { TrimSpec, WallBuildUp } from "@/takeoff";
 
 export interface UnitTypeView {
   id: string;

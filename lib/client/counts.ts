@@ -1,5 +1,5 @@
 import { queryOptions } from "@tanstack/react-query";
-import { api } from "@/lib/api-client";
+import { request } from "./fetch";
 import type { CountsView } from "@/lib/plans/api-types";
 import { projectKey, projectPath, type ProjectScope } from "./project-scope";
 
@@ -7,7 +7,7 @@ import { projectKey, projectPath, type ProjectScope } from "./project-scope";
 export const countsQuery = (s: ProjectScope) =>
   queryOptions({
     queryKey: [...projectKey(s), "counts"] as const,
-    queryFn: async () => (await api<{ counts: CountsView }>(`${projectPath(s)}/counts`)).counts,
+    queryFn: async () => (await request<{ counts: CountsView }>(`${projectPath(s)}/counts`)).counts,
   });
 
 /** Keys carry their data's type, so setQueryData and getQueryData know the cached shape. */

@@ -1,5 +1,5 @@
 import { queryOptions } from "@tanstack/react-query";
-import { api } from "@/lib/api-client";
+import { request } from "./fetch";
 import type { OpeningTypeView } from "@/lib/plans/api-types";
 import { projectKey, projectPath, type ProjectScope } from "./project-scope";
 
@@ -7,7 +7,7 @@ import { projectKey, projectPath, type ProjectScope } from "./project-scope";
 export const openingTypesQuery = (s: ProjectScope) =>
   queryOptions({
     queryKey: [...projectKey(s), "opening-types"] as const,
-    queryFn: async () => (await api<{ openingTypes: OpeningTypeView[] }>(`${projectPath(s)}/opening-types`)).openingTypes,
+    queryFn: async () => (await request<{ openingTypes: OpeningTypeView[] }>(`${projectPath(s)}/opening-types`)).openingTypes,
   });
 
 /** Keys carry their data's type, so setQueryData and getQueryData know the cached shape. */

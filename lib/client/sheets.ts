@@ -1,5 +1,5 @@
 import { queryOptions } from "@tanstack/react-query";
-import { api } from "@/lib/api-client";
+import { request } from "./fetch";
 import type { SheetView } from "@/lib/plans/api-types";
 import { orderSheets } from "@/lib/plans/sheet-order";
 import { projectKey, projectPath, type ProjectScope } from "./project-scope";
@@ -8,14 +8,14 @@ import { projectKey, projectPath, type ProjectScope } from "./project-scope";
 export const sheetsQuery = (s: ProjectScope) =>
   queryOptions({
     queryKey: [...projectKey(s), "sheets"] as const,
-    queryFn: async () => orderSheets((await api<{ sheets: SheetView[] }>(`${projectPath(s)}/sheets`)).sheets),
+    queryFn: async () => orderSheets((await request<{ sheets: SheetView[] }>(`${projectPath(s)}/sheets`)).sheets),
   });
 
 /** One sheet, as the viewer holds it. */
 export const sheetQuery = (s: ProjectScope, sheetId: string) =>
   queryOptions({
     queryKey: [...projectKey(s), "sheet", sheetId] as const,
-    queryFn: async () => (await api<{ sheet: SheetView }>(`${projectPath(s)}/sheets/${sheetId}`)).sheet,
+    queryFn: async () => (await request<{ sheet: SheetView }>(`${projectPath(s)}/sheets/${sheetId}`)).sheet,
   });
 
 /** Keys carry their data's type, so setQueryData and getQueryData know the cached shape. */

@@ -1,5 +1,5 @@
 import { queryOptions } from "@tanstack/react-query";
-import { api } from "@/lib/api-client";
+import { request } from "./fetch";
 import type { TagView } from "@/lib/plans/api-types";
 import { projectKey, projectPath, type ProjectScope } from "./project-scope";
 
@@ -10,7 +10,7 @@ export type ViewerTag = TagView & { pending?: boolean };
 export const tagsQuery = (s: ProjectScope, sheetId: string) =>
   queryOptions({
     queryKey: [...projectKey(s), "tags", sheetId] as const,
-    queryFn: async (): Promise<ViewerTag[]> => (await api<{ tags: TagView[] }>(`${projectPath(s)}/tags?sheetId=${sheetId}`)).tags,
+    queryFn: async (): Promise<ViewerTag[]> => (await request<{ tags: TagView[] }>(`${projectPath(s)}/tags?sheetId=${sheetId}`)).tags,
   });
 
 /** Keys carry their data's type, so setQueryData and getQueryData know the cached shape. */

@@ -1,5 +1,5 @@
 import { queryOptions } from "@tanstack/react-query";
-import { api } from "@/lib/api-client";
+import { request } from "./fetch";
 import type { UnitTypeView } from "@/lib/plans/api-types";
 import { projectKey, projectPath, type ProjectScope } from "./project-scope";
 
@@ -7,7 +7,7 @@ import { projectKey, projectPath, type ProjectScope } from "./project-scope";
 export const unitTypesQuery = (s: ProjectScope) =>
   queryOptions({
     queryKey: [...projectKey(s), "unit-types"] as const,
-    queryFn: async () => (await api<{ unitTypes: UnitTypeView[] }>(`${projectPath(s)}/unit-types`)).unitTypes,
+    queryFn: async () => (await request<{ unitTypes: UnitTypeView[] }>(`${projectPath(s)}/unit-types`)).unitTypes,
   });
 
 /** Keys carry their data's type, so setQueryData and getQueryData know the cached shape. */

@@ -1,7 +1,9 @@
 import { queryOptions } from "@tanstack/react-query";
-import type { PriceBookChangeView, PriceBookView } from "@/lib/price-book/types";
+import { z } from "zod";
+import type { PriceBookView } from "@/lib/price-book/types";
 import { request } from "./fetch";
 import { orgKey, orgPath } from "./org-scope";
+import { priceBookChangeSchema, priceBookSchema } from "./price-book-schemas";
 
 export interface PriceBookScope {
   orgSlug: string;
@@ -17,14 +19,15 @@ export const priceBookPrefix = (s: PriceBookScope) => [...orgKey(s.orgSlug), "pr
 export const priceBookQuery = (s: PriceBookScope) =>
   queryOptions({
     queryKey: [...priceBookPrefix(s), "book"] as const,
-    queryFn: async () => (await request<{ priceBook: PriceBookView }>(priceBookPath(s))).priceBook,
+    // Typed as the view the routes build, whose summary edits (putBook) write into this entry too.
+    queryFn: async (): Promise<PriceBookView> => z.object({ priceBook: priceBookSchema }).parse(await request(priceBookPath(s))).priceBook,
   });
 
 /** The book's change log, newest first, cached as a bare list. */
 export const priceBookChangesQuery = (s: PriceBookScope) =>
   queryOptions({
     queryKey: [...priceBookPrefix(s), "changes"] as const,
-    queryFn: async () => (await request<{ changes: PriceBookChangeView[] }>(`${priceBookPath(s)}/changes`)).changes,
+    queryFn: async () => z.object({ changes: z.array(priceBookChangeSchema) }).parse(await request(`${priceBookPath(s)}/changes`)).changes,
   });
 
 export const priceBookKey = (s: PriceBookScope) => priceBookQuery(s).queryKey;

@@ -1,7 +1,8 @@
 import { queryOptions } from "@tanstack/react-query";
-import type { PriceBookListEntry } from "@/lib/price-book/types";
+import { z } from "zod";
 import { request } from "./fetch";
 import { orgKey, orgPath } from "./org-scope";
+import { priceBookListEntrySchema } from "./price-book-schemas";
 
 export const priceBooksPath = (orgSlug: string) => `${orgPath(orgSlug)}/price-books`;
 
@@ -9,7 +10,7 @@ export const priceBooksPath = (orgSlug: string) => `${orgPath(orgSlug)}/price-bo
 export const priceBooksQuery = (orgSlug: string) =>
   queryOptions({
     queryKey: [...orgKey(orgSlug), "price-books"] as const,
-    queryFn: async () => (await request<{ priceBooks: PriceBookListEntry[] }>(priceBooksPath(orgSlug))).priceBooks,
+    queryFn: async () => z.object({ priceBooks: z.array(priceBookListEntrySchema) }).parse(await request(priceBooksPath(orgSlug))).priceBooks,
   });
 
 export const priceBooksKey = (orgSlug: string) => priceBooksQuery(orgSlug).queryKey;

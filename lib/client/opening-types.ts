@@ -9,7 +9,7 @@ import { projectKey, projectPath, type ProjectScope } from "./project-scope";
  * The shape only, not the engine's rules (takeoff/schemas.ts): a row stored under older rules must still be
  * shown so it can be fixed. `satisfies` keeps each schema in step with the type the routes build.
  */
-const trimSpec = z.object({
+export const trimSpecShape = z.object({
   style: z.enum(["stool-and-apron", "picture-frame"]),
   casingWidth: z.number(),
   casingThickness: z.number(),
@@ -36,7 +36,7 @@ export const openingTypeSchema = z.object({
   height: z.number(),
   setback: z.number(),
   wallBuildUp: wallBuildUp.nullable(),
-  trimSpec,
+  trimSpec: trimSpecShape,
   notes: z.string().nullable(),
   version: z.number(),
 }) satisfies z.ZodType<OpeningTypeView>;

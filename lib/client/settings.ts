@@ -1,9 +1,11 @@
-import type { TrimSpec } from "@/takeoff";
+import { z } from "zod";
 import { request } from "./fetch";
+import { trimSpecShape } from "./opening-types";
 import { orgPath } from "./org-scope";
 
 /** The company's settings as the settings route answers; the page is handed them by the server, so nothing caches them. */
-export type ClientSettings = { trimDefaults: TrimSpec; trimDefaultsOwn: boolean; kerf: number; wastePercent: number };
+export const settingsSchema = z.object({ trimDefaults: trimSpecShape, trimDefaultsOwn: z.boolean(), kerf: z.number(), wastePercent: z.number() });
+export type ClientSettings = z.infer<typeof settingsSchema>;
 
 export const saveSettings = async (orgSlug: string, body: unknown) =>
-  (await request<{ settings: ClientSettings }>(`${orgPath(orgSlug)}/settings`, { method: "PATCH", body })).settings;
+  z.object({ settings: settingsSchema }).parse(await request(`${orgPath(orgSlug)}/settings`, { method: "PATCH", body })).settings;

@@ -1,8 +1,10 @@
 "use client";
 
+import { useQueryClient } from "@tanstack/react-query";
 import { generateReactHelpers } from "@uploadthing/react";
 import { useRef, useState, type DragEvent } from "react";
 import type { PlanRouter } from "@/app/api/uploadthing/core";
+import { planSetsQuery } from "@/lib/client/plan-sets";
 import type { PlanSetView, PlanUploadResult } from "@/lib/plans/api-types";
 import { fileDigest } from "@/lib/plans/upload-progress";
 import { UploadRow, type UploadItem } from "./upload-row";
@@ -17,6 +19,7 @@ export function PlanUpload({ orgSlug, projectId, onUploaded }: { orgSlug: string
   const [items, setItems] = useState<UploadItem[]>([]);
   const [dragging, setDragging] = useState(false);
   const inputRef = useRef<HTMLInputElement>(null);
+  const queryClient = useQueryClient();
   const patch = (id: string, change: Partial<UploadItem>) => setItems((all) => all.map((i) => (i.id === id ? { ...i, ...change } : i)));
 
   /** The project's plan sets with the same bytes, or none (also when the browser cannot hash or the list cannot be read). */
@@ -24,9 +27,8 @@ export function PlanUpload({ orgSlug, projectId, onUploaded }: { orgSlug: string
     try {
       const digest = await fileDigest(file);
       if (!digest) return undefined;
-      const res = await fetch(`/api/orgs/${orgSlug}/projects/${projectId}/plan-sets`);
-      if (!res.ok) return undefined;
-      const { planSets } = (await res.json()) as { planSets: PlanSetView[] };
+      // Always asked afresh: a set uploaded a moment ago must be found.
+      const planSets = await queryClient.fetchQuery({ ...planSetsQuery({ orgSlug, projectId }), staleTime: 0 });
       return planSets.find((p) => p.contentHash === digest);
     } catch {
       return undefined;

@@ -1,10 +1,10 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
 import { useId, useState, type ChangeEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
-import { api, ApiError } from "@/lib/api-client";
+import { ClientError, refusal, request } from "@/lib/client/fetch";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { BASE_COLUMNS } from "@/lib/price-book/csv";
 import { decodeCsvBytes, type CsvEncoding } from "@/lib/price-book/csv-encoding";
 import type { ImportMode, ImportPlan } from "@/lib/price-book/import-plan";
@@ -27,7 +27,24 @@ export function CsvImport({ base, onApplied }: { base: string; onApplied: () => 
   const [preview, setPreview] = useState<Preview | null>(null);
   const [showUnchanged, setShowUnchanged] = useState(false);
   const [note, setNote] = useState<{ tone: "info" | "error"; text: string } | null>(null);
-  const send = useMutation({ mutationFn: (body: unknown) => api<Answer>(`${base}/csv`, { method: "POST", body }) });
+  const send = useFormMutation({
+    mutationFn: (body: { csv: string; mode: ImportMode; apply: boolean; previewToken?: string }) => request<Answer>(`${base}/csv`, { method: "POST", body }),
+    onSuccess: (answer, { apply }) => {
+      if (!apply) return setPreview(answer.preview);
+      const c = answer.preview.counts;
+      setNote({ tone: "info", text: `Imported: ${c.create} added, ${c.update} changed, ${c.delete} removed, ${c.unchanged} unchanged.` });
+      setPreview(null);
+      onApplied();
+    },
+    onError: (error) => {
+      if (!(error instanceof ClientError)) return setNote({ tone: "error", text: "Could not reach the server; nothing was imported." });
+      // A refused file, or a book changed since the preview: the server sends the preview as it is now.
+      const again = (refusal(error, "import_refused") ?? refusal(error, "preview_changed"))?.preview as Preview | undefined;
+      if (again) setPreview(again);
+      const fields = Object.values(error.fields);
+      setNote({ tone: "error", text: again || fields.length === 0 ? error.message : `${error.message} ${fields.join(" ")}` });
+    },
+  });
 
   const changed = () => {
     setPreview(null);
@@ -46,22 +63,9 @@ export function CsvImport({ base, onApplied }: { base: string; onApplied: () => 
     setCsv(decoded.text);
   }
 
-  async function run(apply: boolean) {
+  function run(apply: boolean) {
     setNote(null);
-    try {
-      const answer = await send.mutateAsync({ csv, mode, apply, previewToken: apply ? preview?.previewToken : undefined });
-      if (!apply) return setPreview(answer.preview);
-      const c = answer.preview.counts;
-      setNote({ tone: "info", text: `Imported: ${c.create} added, ${c.update} changed, ${c.delete} removed, ${c.unchanged} unchanged.` });
-      setPreview(null);
-      onApplied();
-    } catch (error) {
-      if (!(error instanceof ApiError)) return setNote({ tone: "error", text: "Could not reach the server; nothing was imported." });
-      const again = error.body.preview as Preview | undefined;
-      if (again) setPreview(again);
-      const fields = Object.values(error.fields ?? {});
-      setNote({ tone: "error", text: again || fields.length === 0 ? error.message : `${error.message} ${fields.join(" ")}` });
-    }
+    send.submit({ csv, mode, apply, previewToken: apply ? preview?.previewToken : undefined });
   }
 
   const work = preview && preview.counts.create + preview.counts.update + preview.counts.delete;
@@ -106,12 +110,12 @@ export function CsvImport({ base, onApplied }: { base: string; onApplied: () => 
         </fieldset>
         {note && <Notice tone={note.tone}>{note.text}</Notice>}
         <div className="flex flex-wrap gap-3">
-          <Button type="button" look="secondary" disabled={csv.trim() === "" || send.isPending} onClick={() => void run(false)}>
-            {send.isPending && !preview ? "Reading…" : "Preview changes"}
+          <Button type="button" look="secondary" disabled={csv.trim() === "" || send.pending} onClick={() => run(false)}>
+            {send.pending && !preview ? "Reading…" : "Preview changes"}
           </Button>
           {preview && (
-            <Button type="button" disabled={!preview.ok || !work || send.isPending} onClick={() => void run(true)}>
-              {send.isPending ? "Importing…" : preview.ok ? (work ? "Apply import" : "Nothing to apply") : "Fix the errors to apply"}
+            <Button type="button" disabled={!preview.ok || !work || send.pending} onClick={() => run(true)}>
+              {send.pending ? "Importing…" : preview.ok ? (work ? "Apply import" : "Nothing to apply") : "Fix the errors to apply"}
             </Button>
           )}
         </div>

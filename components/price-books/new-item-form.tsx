@@ -1,11 +1,12 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
 import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
+import { FormError, SubmitButton } from "@/components/ui/form-error";
 import { Field, Select, TextInput } from "@/components/ui/field";
-import { api, ApiError } from "@/lib/api-client";
+import { request } from "@/lib/client/fetch";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { emptyItemDraft, planNewItem, type NewItemDraft } from "@/lib/price-book/forms";
 import { KIND_LABELS, MATERIAL_KINDS, type MaterialKind } from "@/lib/price-book/kinds";
 import type { PriceBookItemView } from "@/lib/price-book/types";
@@ -15,41 +16,34 @@ const cellInput = "w-full rounded-md border border-graphite-400 bg-white px-2 py
 /** Adds a material: its profile, and the stock lengths it is sold in with a price for each. */
 export function NewItemForm({ base, onAdded }: { base: string; onAdded: (item: PriceBookItemView) => void }) {
   const [draft, setDraft] = useState<NewItemDraft>(() => emptyItemDraft());
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [added, setAdded] = useState<string | null>(null);
-  const create = useMutation({
-    mutationFn: (body: unknown) => api<{ item: PriceBookItemView }>(`${base}/items`, { method: "POST", body }),
+  const create = useFormMutation({
+    mutationFn: (body: unknown) => request<{ item: PriceBookItemView }>(`${base}/items`, { method: "POST", body }),
     onSuccess: ({ item }) => {
       onAdded(item);
       setAdded(item.name);
       // The next line is usually the same profile in another species or size: keep kind and lengths.
       setDraft((d) => ({ ...emptyItemDraft(d.kind), stock: d.stock.map((s) => ({ length: s.length, price: "" })) }));
-      setErrors({});
     },
-    onError: (error) => setErrors(error instanceof ApiError ? error.fields : {}),
   });
+  const { errors } = create;
   const set = <K extends keyof NewItemDraft>(key: K, value: NewItemDraft[K]) => {
     setDraft((d) => ({ ...d, [key]: value }));
-    setErrors(({ [key]: _, ...rest }) => rest);
+    create.clear((k) => k === key);
   };
   const setStock = (i: number, part: "length" | "price", value: string) => {
     setDraft((d) => ({ ...d, stock: d.stock.map((s, j) => (j === i ? { ...s, [part]: value } : s)) }));
-    setErrors(({ [`stock.${i}.${part}`]: _, stock: __, ...rest }) => rest);
+    create.clear((k) => k === `stock.${i}.${part}` || k === "stock");
   };
 
   function submit(e: FormEvent) {
     e.preventDefault();
     setAdded(null);
     const plan = planNewItem(draft);
-    if (plan.kind !== "send") {
-      create.reset();
-      return setErrors(plan.kind === "invalid" ? plan.fields : {});
-    }
-    setErrors({});
-    create.mutate(plan.body);
+    if (plan.kind !== "send") return create.refuse(plan.kind === "invalid" ? plan.fields : {});
+    create.submit(plan.body);
   }
 
-  const count = Object.keys(errors).length;
   const text = (key: "name" | "faceWidth" | "thickness" | "species" | "supplierCode", label: string, placeholder: string, hint?: string) => (
     <Field label={label} name={`new-${key}`} error={errors[key]} hint={hint}>
       <TextInput name={`new-${key}`} placeholder={placeholder} value={draft[key]} onChange={(e) => set(key, e.target.value)} error={errors[key]} />
@@ -58,8 +52,7 @@ export function NewItemForm({ base, onAdded }: { base: string; onAdded: (item: P
   return (
     <Card title="Add an item">
       <form onSubmit={submit} className="space-y-4" noValidate>
-        {create.isError && <Notice tone="error">{create.error.message}</Notice>}
-        {!create.isError && count > 0 && <Notice tone="error">{count === 1 ? "One field needs attention." : `${count} fields need attention.`}</Notice>}
+        <FormError form={create} countFields />
         {added && <Notice>Added {added}.</Notice>}
         <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
           {text("name", "Name", "Casing 2 1/2 colonial")}
@@ -118,9 +111,9 @@ export function NewItemForm({ base, onAdded }: { base: string; onAdded: (item: P
             Add a length
           </Button>
         </fieldset>
-        <Button type="submit" disabled={create.isPending}>
-          {create.isPending ? "Adding…" : "Add to price book"}
-        </Button>
+        <SubmitButton pending={create.pending} busy="Adding…">
+          Add to price book
+        </SubmitButton>
       </form>
     </Card>
   );

@@ -1,11 +1,11 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
 import { useState, type FormEvent } from "react";
-import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
+import { SubmitButton } from "@/components/ui/form-error";
 import { Field, TextInput } from "@/components/ui/field";
-import { api, ApiError } from "@/lib/api-client";
+import { ClientError, refusal, request } from "@/lib/client/fetch";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { planRates, rateFieldOf, ratesDraft, type RatesDraft } from "@/lib/price-book/forms";
 import { formatMoney, percentText } from "@/lib/price-book/numbers";
 import type { PriceBookSummary } from "@/lib/price-book/types";
@@ -45,36 +45,41 @@ function RatesReadOnly({ book }: { book: PriceBookSummary }) {
 /** Labour rates, markup and tax. Percentages are typed as percentages; the API keeps fractions. */
 export function RatesForm({ base, book, canWrite, onSaved }: { base: string; book: PriceBookSummary; canWrite: boolean; onSaved: (b: PriceBookSummary) => void }) {
   const [draft, setDraft] = useState<RatesDraft>(() => ratesDraft(book));
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [note, setNote] = useState<{ tone: "info" | "error"; text: string } | null>(null);
-  const save = useMutation({ mutationFn: (body: unknown) => api<{ priceBook: PriceBookSummary }>(base, { method: "PATCH", body }) });
-  const set = <K extends keyof RatesDraft>(key: K, value: RatesDraft[K]) => {
-    setDraft((d) => ({ ...d, [key]: value }));
-    setErrors(({ [key]: _, ...rest }) => rest);
-  };
-
-  async function submit(e: FormEvent) {
-    e.preventDefault();
-    setNote(null);
-    const plan = planRates(book, draft);
-    if (plan.kind === "invalid") return setErrors(plan.fields);
-    setErrors({});
-    if (plan.kind === "unchanged") return setNote({ tone: "info", text: "Nothing to save: the rates are as shown." });
-    try {
-      const { priceBook } = await save.mutateAsync(plan.body);
+  const save = useFormMutation({
+    mutationFn: (body: unknown) => request<{ priceBook: PriceBookSummary }>(base, { method: "PATCH", body }),
+    fieldsFrom: (fields) => Object.fromEntries(Object.entries(fields).map(([k, m]) => [rateFieldOf(k), m])),
+    onSuccess: ({ priceBook }) => {
       onSaved(priceBook);
       setDraft(ratesDraft(priceBook));
       setNote({ tone: "info", text: "Saved." });
-    } catch (error) {
-      if (!(error instanceof ApiError)) return setNote({ tone: "error", text: "Could not reach the server; nothing was saved." });
-      const current = error.status === 409 ? (error.body.current as PriceBookSummary | undefined) : undefined;
+    },
+    onError: (error) => {
+      if (!(error instanceof ClientError)) return setNote({ tone: "error", text: "Could not reach the server; nothing was saved." });
+      const current = refusal(error, "stale")?.current as PriceBookSummary | null | undefined;
       if (current) {
         onSaved(current);
         setDraft(ratesDraft(current));
       }
-      setErrors(Object.fromEntries(Object.entries(error.fields).map(([k, m]) => [rateFieldOf(k), m])));
       setNote({ tone: "error", text: error.message });
+    },
+  });
+  const { errors } = save;
+  const set = <K extends keyof RatesDraft>(key: K, value: RatesDraft[K]) => {
+    setDraft((d) => ({ ...d, [key]: value }));
+    save.clear((k) => k === key);
+  };
+
+  function submit(e: FormEvent) {
+    e.preventDefault();
+    setNote(null);
+    const plan = planRates(book, draft);
+    if (plan.kind === "invalid") return save.refuse(plan.fields);
+    if (plan.kind === "unchanged") {
+      save.refuse({});
+      return setNote({ tone: "info", text: "Nothing to save: the rates are as shown." });
     }
+    save.submit(plan.body);
   }
 
   if (!canWrite) {
@@ -104,9 +109,9 @@ export function RatesForm({ base, book, canWrite, onSaved }: { base: string; boo
           <input type="checkbox" checked={draft.taxLabour} onChange={(e) => set("taxLabour", e.target.checked)} />
           Tax labour as well as materials
         </label>
-        <Button type="submit" disabled={save.isPending}>
-          {save.isPending ? "Saving…" : "Save rates"}
-        </Button>
+        <SubmitButton pending={save.pending} busy="Saving…">
+          Save rates
+        </SubmitButton>
       </form>
     </Card>
   );

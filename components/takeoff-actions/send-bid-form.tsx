@@ -1,22 +1,24 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
 import type { FormEvent } from "react";
-import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/card";
 import { Field, TextInput } from "@/components/ui/field";
-import { api, ApiError } from "@/lib/api-client";
+import { FormError, SubmitButton } from "@/components/ui/form-error";
+import { request } from "@/lib/client/fetch";
+import { sendsPath } from "@/lib/client/sends";
+import type { TakeoffScope } from "@/lib/client/takeoffs";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 
-export function SendBidForm({ url, onSent }: { url: string; onSent: () => void }) {
-  const send = useMutation({
-    mutationFn: (body: { to: string; message: string }) => api<{ sent: { to: string } }>(url, { method: "POST", body }),
+export function SendBidForm({ scope, onSent }: { scope: TakeoffScope; onSent: () => void }) {
+  const send = useFormMutation({
+    mutationFn: (body: { to: string; message: string }) => request<{ sent: { to: string } }>(sendsPath(scope), { method: "POST", body }),
     onSuccess: onSent,
   });
-  const fields = send.error instanceof ApiError ? send.error.fields : {};
+  const fields = send.errors;
   function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = e.currentTarget;
-    send.mutate(Object.fromEntries(new FormData(form)) as { to: string; message: string }, { onSuccess: () => form.reset() });
+    send.submit(Object.fromEntries(new FormData(form)) as { to: string; message: string }, { onSuccess: () => form.reset() });
   }
   return (
     <form onSubmit={submit} className="grid gap-3 rounded-md border border-maple-200 p-3 sm:grid-cols-[1fr_2fr_auto] sm:items-end" noValidate>
@@ -26,17 +28,17 @@ export function SendBidForm({ url, onSent }: { url: string; onSent: () => void }
       <Field label="Message (optional)" name="message" error={fields.message}>
         <TextInput name="message" maxLength={2000} error={fields.message} />
       </Field>
-      <Button type="submit" disabled={send.isPending}>
-        {send.isPending ? "Sending…" : "Send bid"}
-      </Button>
-      {send.isError && !fields.to && (
+      <SubmitButton pending={send.pending} busy="Sending…">
+        Send bid
+      </SubmitButton>
+      {send.formError && !fields.to && (
         <div className="sm:col-span-3">
-          <Notice tone="error">{send.error.message}</Notice>
+          <FormError form={send} />
         </div>
       )}
-      {send.isSuccess && (
+      {send.mutation.isSuccess && (
         <div className="sm:col-span-3">
-          <Notice>Sent to {send.data.sent.to}.</Notice>
+          <Notice>Sent to {send.mutation.data.sent.to}.</Notice>
         </div>
       )}
     </form>

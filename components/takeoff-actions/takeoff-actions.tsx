@@ -5,7 +5,9 @@ import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
 import { LockMark } from "@/components/ui/lock-mark";
-import { api } from "@/lib/api-client";
+import { request } from "@/lib/client/fetch";
+import { sendsKey, sendsQuery } from "@/lib/client/sends";
+import { takeoffKey, takeoffPath } from "@/lib/client/takeoffs";
 import { SendBidForm } from "./send-bid-form";
 
 interface Props {
@@ -17,20 +19,19 @@ interface Props {
   canRun: boolean;
 }
 
-type Send = { to: string; subject: string; sentAt: string; sentByName: string | null };
-
 /** What can be done with a saved takeoff: documents out, marking it as the bid (which locks it), sending, copying. */
 export function TakeoffActions({ orgSlug, projectId, takeoffId, status, canSubmit, canRun }: Props) {
-  const base = `/api/orgs/${orgSlug}/projects/${projectId}/takeoffs/${takeoffId}`;
+  const scope = { orgSlug, projectId, takeoffId };
+  const base = takeoffPath(scope);
   const router = useRouter();
   const queryClient = useQueryClient();
-  const sends = useQuery({ queryKey: ["takeoff-sends", takeoffId], queryFn: () => api<{ sends: Send[] }>(`${base}/sends`) });
+  const sends = useQuery(sendsQuery(scope));
   const submit = useMutation({
-    mutationFn: () => api(`${base}/submit`, { method: "POST" }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ["takeoff", orgSlug, projectId, takeoffId] }),
+    mutationFn: () => request(`${base}/submit`, { method: "POST" }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: takeoffKey(scope) }),
   });
   const copy = useMutation({
-    mutationFn: () => api<{ takeoff: { id: string } }>(`${base}/copy`, { method: "POST" }),
+    mutationFn: () => request<{ takeoff: { id: string } }>(`${base}/copy`, { method: "POST" }),
     onSuccess: ({ takeoff }) => router.push(`/${orgSlug}/projects/${projectId}/takeoffs/${takeoff.id}`),
   });
   const error = submit.error ?? copy.error;
@@ -66,12 +67,12 @@ export function TakeoffActions({ orgSlug, projectId, takeoffId, status, canSubmi
             </Button>
           )}
         </div>
-        {canSubmit && <SendBidForm url={`${base}/sends`} onSent={() => queryClient.invalidateQueries({ queryKey: ["takeoff-sends", takeoffId] })} />}
-        {sends.data && sends.data.sends.length > 0 && (
+        {canSubmit && <SendBidForm scope={scope} onSent={() => queryClient.invalidateQueries({ queryKey: sendsKey(scope) })} />}
+        {sends.data && sends.data.length > 0 && (
           <div>
             <h3 className="text-sm font-semibold">Sent</h3>
             <ul className="mt-1 space-y-0.5 text-sm" aria-label="Bid e-mails sent">
-              {sends.data.sends.map((s) => (
+              {sends.data.map((s) => (
                 <li key={`${s.to}-${s.sentAt}`}>
                   ✉ {s.to} · {new Date(s.sentAt).toLocaleString("en-US")} {s.sentByName ? `· by ${s.sentByName}` : ""}
                 </li>

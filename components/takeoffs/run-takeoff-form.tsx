@@ -1,14 +1,16 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
-import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
+import { SubmitButton } from "@/components/ui/form-error";
 import { Field, Select, TextInput } from "@/components/ui/field";
-import { api, ApiError } from "@/lib/api-client";
+import { request } from "@/lib/client/fetch";
+import { takeoffsKey, takeoffsPath } from "@/lib/client/takeoffs";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { inchesText } from "@/lib/takeoffs/format";
-import { takeoffsApi, takeoffsPage } from "@/lib/takeoffs/view";
+import { takeoffsPage } from "@/lib/takeoffs/view";
 
 export interface PriceBookChoice {
   id: string;
@@ -45,22 +47,23 @@ export function RunTakeoffForm({
   const [casingId, setCasingId] = useState("");
   const bookCasings = casings.filter((c) => c.priceBookId === bookId);
 
-  const run = useMutation({
+  const scope = { orgSlug, projectId };
+  const run = useFormMutation({
     mutationFn: (body: { name: string; note: string; priceBookId: string; casingItemId: string | null; allowPlaceholders: boolean }) =>
-      api<{ takeoff: { id: string } }>(takeoffsApi(orgSlug, projectId), { method: "POST", body }),
+      request<{ takeoff: { id: string } }>(takeoffsPath(scope), { method: "POST", body }),
     onSuccess: ({ takeoff }) => {
-      void queryClient.invalidateQueries({ queryKey: ["takeoffs", orgSlug, projectId] });
+      void queryClient.invalidateQueries({ queryKey: takeoffsKey(scope) });
       router.push(`${takeoffsPage(orgSlug, projectId)}/${takeoff.id}`);
     },
   });
-  const fields = run.error instanceof ApiError ? run.error.fields : {};
+  const fields = run.errors;
   // A message not tied to a field we show (an empty window list) goes at the top of the form.
-  const general = run.isError && !fields.name && !fields.note && !fields.priceBookId && !fields.casingItemId ? (fields._ ?? run.error.message) : null;
+  const general = run.formError && !fields.name && !fields.note && !fields.priceBookId && !fields.casingItemId ? (fields._ ?? run.formError) : null;
 
   function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
-    run.mutate({
+    run.submit({
       name: String(form.get("name") ?? ""),
       note: String(form.get("note") ?? ""),
       priceBookId: bookId,
@@ -70,7 +73,7 @@ export function RunTakeoffForm({
   }
 
   // After success the page is changing; keep the button busy rather than inviting a second run.
-  const busy = run.isPending || run.isSuccess;
+  const busy = run.pending || run.mutation.isSuccess;
   return (
     <Card title="Run a takeoff">
       <form onSubmit={submit} className="space-y-4" noValidate>
@@ -130,9 +133,9 @@ export function RunTakeoffForm({
             </span>
           </span>
         </label>
-        <Button type="submit" disabled={busy || !bookId}>
-          {busy ? "Running the takeoff…" : "Run takeoff"}
-        </Button>
+        <SubmitButton pending={busy} busy="Running the takeoff…" disabled={!bookId}>
+          Run takeoff
+        </SubmitButton>
       </form>
     </Card>
   );

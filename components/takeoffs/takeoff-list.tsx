@@ -1,4 +1,5 @@
 import Link from "next/link";
+import type { ProjectScope } from "@/lib/client/project-scope";
 import { count, usd } from "@/lib/takeoffs/format";
 import type { TakeoffListItem } from "@/lib/takeoffs/view";
 import { LocalTime } from "./local-time";
@@ -13,8 +14,8 @@ export function TakeoffList({
 }: {
   takeoffs: TakeoffListItem[];
   pageBase: string;
-  /** Given to roles that may rename and delete drafts. */
-  edit?: { apiBase: string; listKey: readonly unknown[] };
+  /** Given to roles that may rename and delete drafts: the project the takeoffs belong to. */
+  edit?: ProjectScope;
 }) {
   return (
     <div className="relative overflow-x-auto rounded-lg border border-maple-200 bg-white">
@@ -59,7 +60,7 @@ export function TakeoffList({
               </td>
               {edit && (
                 <td className="px-2 py-1.5">
-                  <TakeoffRowActions takeoff={t} apiBase={edit.apiBase} listKey={edit.listKey} />
+                  <TakeoffRowActions takeoff={t} scope={edit} />
                 </td>
               )}
             </tr>

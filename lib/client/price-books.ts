@@ -1,12 +1,16 @@
 import { queryOptions } from "@tanstack/react-query";
-import { api } from "@/lib/api-client";
-import type { PriceBookListEntry } from "@/lib/price-book/types";
+import { z } from "zod";
+import { request } from "./fetch";
+import { orgKey, orgPath } from "./org-scope";
+import { priceBookListEntrySchema } from "./price-book-schemas";
+
+export const priceBooksPath = (orgSlug: string) => `${orgPath(orgSlug)}/price-books`;
 
 /** The organisation's price books, cached as a bare list (the price-books page and the window list's gap check share it). */
 export const priceBooksQuery = (orgSlug: string) =>
   queryOptions({
-    queryKey: ["orgs", orgSlug, "price-books"] as const,
-    queryFn: async () => (await api<{ priceBooks: PriceBookListEntry[] }>(`/api/orgs/${orgSlug}/price-books`)).priceBooks,
+    queryKey: [...orgKey(orgSlug), "price-books"] as const,
+    queryFn: async () => z.object({ priceBooks: z.array(priceBookListEntrySchema) }).parse(await request(priceBooksPath(orgSlug))).priceBooks,
   });
 
 export const priceBooksKey = (orgSlug: string) => priceBooksQuery(orgSlug).queryKey;

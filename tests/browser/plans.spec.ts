@@ -53,6 +53,24 @@ test("upload, calibrate, tag four openings of two types, count, reload", async (
     await expect(page.getByText("A-201", { exact: true })).toBeVisible();
   });
 
+  await test.step("rename a sheet in place: an empty label is refused beside it, a new one is saved", async () => {
+    await page.getByRole("button", { name: "Rename A-101" }).click();
+    const input = page.getByLabel("Sheet label");
+    const form = page.locator("form").filter({ has: input });
+    await input.fill("");
+    await form.getByRole("button", { name: "Save" }).click();
+    await expect(input).toHaveAttribute("aria-invalid", "true");
+    await input.fill("A-101R");
+    await form.getByRole("button", { name: "Save" }).click();
+    await expect(page.getByText("A-101R", { exact: true })).toBeVisible();
+    // And back, through the server again, so the later steps find the sheet by its drawn number.
+    await page.getByRole("button", { name: "Rename A-101R" }).click();
+    await page.getByLabel("Sheet label").fill("A-101");
+    await page.locator("form").filter({ has: page.getByLabel("Sheet label") }).getByRole("button", { name: "Save" }).click();
+    await expect(page.getByLabel("Sheet label")).toHaveCount(0);
+    await expect(page.getByText("A-101", { exact: true })).toBeVisible();
+  });
+
   await test.step("mark A-201 as a Type A plan on the Plans page", async () => {
     await page.getByLabel("Unit type of A-201").selectOption({ label: "Type A (× 12)" });
     await expect(page.getByLabel("Unit type of A-201")).toHaveValue(/[0-9a-f-]{36}/);

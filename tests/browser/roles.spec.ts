@@ -38,12 +38,22 @@ test("owner invites an estimator and a project manager; each sees only what the 
     await expect(page.getByText("No projects yet. Create the first one.")).toBeVisible();
   });
 
+  await test.step("a new project without a name is refused beside the field, and nothing is created", async () => {
+    await page.getByRole("button", { name: "Create project" }).click();
+    await expect(page.getByRole("alert").filter({ hasText: "Some fields need attention." })).toBeVisible();
+    await expect(page.getByText("Project name is required.")).toBeVisible();
+    await expect(page.getByLabel("Project name")).toHaveAttribute("aria-invalid", "true");
+    await expect(page.getByText("No projects yet. Create the first one.")).toBeVisible();
+  });
+
   await test.step("owner creates a project through the New project form", async () => {
     await expect(page.getByRole("heading", { name: "New project" })).toBeVisible();
     await page.getByLabel("Project name").fill(project.name);
     await page.getByLabel("General contractor").fill(project.contractor);
     await page.getByRole("button", { name: "Create project" }).click();
     await expect(page.getByRole("status")).toHaveText(`Created “${project.name}”.`);
+    // The refusal's messages went with the answer that replaced it.
+    await expect(page.getByText("Project name is required.")).toHaveCount(0);
     const row = projectsTable(page).getByRole("row").filter({ hasText: project.name });
     await expect(row).toContainText(project.contractor);
     await expect(row).toContainText("Draft");

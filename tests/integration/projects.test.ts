@@ -52,6 +52,46 @@ describe("projects", () => {
     expect(await snapshot()).toBe(before);
   });
 
+  // Moved here with the new-project form, which now posts to this route (the server action it used is gone).
+  it.each([
+    ["admin", 201],
+    ["estimator", 201],
+    ["project_manager", 403],
+  ] as const)("creating a project as %s answers %i, naming the project when it is made", async (role, status) => {
+    const w = await makeOrg("Tamarack");
+    const before = await snapshot();
+    const res = await call(projectsRoute.POST, { method: "POST", path: "/api/x", params: { orgSlug: w.org.slug }, body: { name: "Wren Court" }, cookie: await sessionCookie(w.people[role]) });
+    expect(res.status).toBe(status);
+    if (status === 201) expect(res.json.project).toMatchObject({ name: "Wren Court", generalContractor: null, bidDue: null, status: "draft" });
+    else expect(await snapshot()).toBe(before);
+  });
+
+  it("refuses a new project's bad fields all at once, as the form sends them, and writes nothing", async () => {
+    const w = await makeOrg("Tamarack");
+    const before = await snapshot();
+    const res = await call(projectsRoute.POST, {
+      method: "POST",
+      path: "/api/x",
+      params: { orgSlug: w.org.slug },
+      // Empty inputs come as "", exactly as the form posts them.
+      body: { name: "x".repeat(161), generalContractor: "", bidDue: "31/02/2027" },
+      cookie: await sessionCookie(w.people.estimator),
+    });
+    expect(res.status).toBe(422);
+    expect(res.json.fields).toEqual({
+      name: "Project name must be at most 160 characters.",
+      bidDue: "Bid due date must be a date (YYYY-MM-DD).",
+    });
+    expect(await snapshot()).toBe(before);
+  });
+
+  it("takes a new project's empty optional fields as none", async () => {
+    const w = await makeOrg("Tamarack");
+    const res = await call(projectsRoute.POST, { method: "POST", path: "/api/x", params: { orgSlug: w.org.slug }, body: { name: "Wren Court", generalContractor: "", bidDue: "" }, cookie: await sessionCookie(w.people.estimator) });
+    expect(res.status).toBe(201);
+    expect(res.json.project).toMatchObject({ generalContractor: null, bidDue: null });
+  });
+
   it("a malformed project id or an unknown org slug is a 404, never a 500", async () => {
     const w = await makeOrg("Tamarack");
     const cookie = await sessionCookie(w.people.admin);

@@ -1,6 +1,7 @@
 "use client";
 
 import { useState, type FormEvent } from "react";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { sheetUpdateSchema } from "@/lib/validators/plans";
 
 const input = "w-full rounded border border-graphite-400 bg-white px-2 py-1 text-sm aria-[invalid=true]:border-alarm-600";
@@ -21,19 +22,20 @@ export function SheetLabelEditor({
 }) {
   const [text, setText] = useState(label);
   const [error, setError] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
+  // onSave answers the refusal's fields rather than throwing (a stale edit is shown by the list itself).
+  const save = useFormMutation({
+    mutationFn: onSave,
+    onSuccess: (fields) => (fields ? setError(Object.values(fields).join(" ")) : onClose()),
+  });
+  const saving = save.pending;
   const id = `label-${sheetId}`;
 
-  async function submit(e: FormEvent) {
+  function submit(e: FormEvent) {
     e.preventDefault();
     if (text.trim() === label) return onClose();
     const checked = sheetUpdateSchema.safeParse({ version, label: text });
     if (!checked.success) return setError(checked.error.issues[0]?.message ?? "Check the label.");
-    setSaving(true);
-    const fields = await onSave(checked.data.label ?? text);
-    setSaving(false);
-    if (fields) setError(Object.values(fields).join(" "));
-    else onClose();
+    save.submit(checked.data.label ?? text);
   }
 
   return (

@@ -2,8 +2,9 @@
 
 import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
+import { SubmitButton } from "@/components/ui/form-error";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
-import { PlansApiError } from "@/lib/plans/window-list/request";
 import { unitTypeSchema } from "@/lib/validators/plans";
 
 const input = "w-full rounded border border-graphite-400 bg-white px-2 py-1 text-sm aria-[invalid=true]:border-alarm-600";
@@ -24,27 +25,24 @@ export function UnitTypeForm({
 }) {
   const [name, setName] = useState(initial.name);
   const [count, setCount] = useState(initial.count);
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [busy, setBusy] = useState(false);
+  const form = useFormMutation({
+    mutationFn: onSubmit,
+    onSuccess: () => {
+      if (!onCancel) (setName(""), setCount(""));
+    },
+  });
+  const { errors } = form;
 
-  async function submit(e: FormEvent) {
+  function submit(e: FormEvent) {
     e.preventDefault();
     const checked = unitTypeSchema.safeParse({ name, count });
-    if (!checked.success) return setErrors(fieldErrorsOf(checked.error));
-    setBusy(true);
-    try {
-      await onSubmit(checked.data);
-      setErrors({});
-      if (!onCancel) (setName(""), setCount(""));
-    } catch (error) {
-      const fields = error instanceof PlansApiError ? error.fields : {};
-      setErrors(Object.keys(fields).length > 0 ? fields : { _: (error as Error).message });
-    } finally {
-      setBusy(false);
-    }
+    if (!checked.success) return form.refuse(fieldErrorsOf(checked.error));
+    form.submit(checked.data);
   }
 
-  const message = [errors.name, errors.count, errors._].filter(Boolean).join(" ");
+  // A refusal that names no field is said here too: this small form has no line of its own above the inputs.
+  const general = errors._ ?? (Object.keys(errors).length === 0 ? form.formError : null);
+  const message = [errors.name, errors.count, general].filter(Boolean).join(" ");
   return (
     <form onSubmit={submit} onKeyDown={(e) => e.key === "Escape" && onCancel?.()} className="space-y-1" noValidate>
       <div className="grid grid-cols-[1fr_5rem] gap-2">
@@ -63,9 +61,9 @@ export function UnitTypeForm({
         </p>
       )}
       <div className="flex gap-2">
-        <Button type="submit" className="px-2.5 py-1 text-xs" disabled={busy}>
-          {busy ? "Saving…" : submitLabel}
-        </Button>
+        <SubmitButton pending={form.pending} busy="Saving…" className="px-2.5 py-1 text-xs">
+          {submitLabel}
+        </SubmitButton>
         {onCancel && (
           <Button type="button" look="quiet" className="px-2.5 py-1 text-xs" onClick={onCancel}>
             Cancel

@@ -5,7 +5,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
 import type { UnitTypeView } from "@/lib/plans/api-types";
-import { PlansApiError, plansApi } from "@/lib/plans/window-list/request";
+import { ClientError, request } from "@/lib/client/fetch";
 import { UnitTypeForm } from "./unit-type-form";
 
 /** The job's repeated layouts and how many of each it has. */
@@ -21,15 +21,15 @@ export function UnitTypesEditor({
   onChanged: () => void;
 }) {
   const [editing, setEditing] = useState<string | null>(null);
-  // Someone else saved first (409): reload the list so the next try starts from their version.
+  // Someone else saved first, or the name is taken meanwhile: reload the list so the next try starts from theirs.
   const reloadIfStale = (error: unknown): never => {
-    if (error instanceof PlansApiError && error.status === 409) onChanged();
+    if (error instanceof ClientError && (error.code === "stale" || error.code === "conflict")) onChanged();
     throw error;
   };
   const save = (path: string, method: "POST" | "PATCH", body: unknown) =>
-    plansApi(`${base}/unit-types${path}`, { method, body }).then(onChanged, reloadIfStale);
+    request(`${base}/unit-types${path}`, { method, body }).then(onChanged, reloadIfStale);
   const remove = useMutation({
-    mutationFn: (u: UnitTypeView) => plansApi<void>(`${base}/unit-types/${u.id}?version=${u.version}`, { method: "DELETE" }).catch(reloadIfStale),
+    mutationFn: (u: UnitTypeView) => request<void>(`${base}/unit-types/${u.id}?version=${u.version}`, { method: "DELETE" }).catch(reloadIfStale),
     onSuccess: onChanged,
   });
 

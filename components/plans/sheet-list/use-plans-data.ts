@@ -7,17 +7,18 @@ import { openingTypesQuery } from "@/lib/client/opening-types";
 import { sheetsKey, sheetsQuery } from "@/lib/client/sheets";
 import { unitTypesKey, unitTypesQuery } from "@/lib/client/unit-types";
 import type { SheetView } from "@/lib/plans/api-types";
-import { PlansApiError, plansApi, projectApi } from "@/lib/plans/window-list/request";
+import { ClientError, refusal, request } from "@/lib/client/fetch";
+import { projectPath } from "@/lib/client/project-scope";
 
 export type SheetPatch = { label?: string; unitTypeId?: string | null; countRole?: SheetView["countRole"] };
 export type SheetNotice = { text: string; current: SheetView | null };
 
 /** Everything the plans page reads, and the sheet edits with their stale-edit recovery. */
 export function usePlansData(orgSlug: string, projectId: string) {
-  const base = projectApi(orgSlug, projectId);
   const queryClient = useQueryClient();
   // Keys, fetchers and cached shapes come from lib/client: the viewer reads these same entries.
   const scope = { orgSlug, projectId };
+  const base = projectPath(scope);
   const sheets = useQuery(sheetsQuery(scope));
   const unitTypes = useQuery(unitTypesQuery(scope));
   const counts = useQuery(countsQuery(scope));
@@ -34,7 +35,7 @@ export function usePlansData(orgSlug: string, projectId: string) {
   async function saveSheet(sheet: SheetView, patch: SheetPatch): Promise<Record<string, string> | null> {
     setNotices(({ [sheet.id]: _, ...rest }) => rest);
     try {
-      const { sheet: saved } = await plansApi<{ sheet: SheetView }>(`${base}/sheets/${sheet.id}`, {
+      const { sheet: saved } = await request<{ sheet: SheetView }>(`${base}/sheets/${sheet.id}`, {
         method: "PATCH",
         body: { version: sheet.version, ...patch },
       });
@@ -42,14 +43,15 @@ export function usePlansData(orgSlug: string, projectId: string) {
       if (patch.unitTypeId !== undefined || patch.countRole !== undefined) void queryClient.invalidateQueries({ queryKey: countsKey(scope) });
       return null;
     } catch (error) {
-      if (error instanceof PlansApiError && error.status === 409 && error.current !== undefined) {
-        const current = (error.current ?? null) as SheetView | null;
+      const stale = refusal(error, "stale");
+      if (stale) {
+        const current = (stale.current ?? null) as SheetView | null;
         if (current) putSheet(current);
         else void queryClient.invalidateQueries({ queryKey: sheetsKey(scope) });
-        setNotices((n) => ({ ...n, [sheet.id]: { text: error.message, current } }));
+        setNotices((n) => ({ ...n, [sheet.id]: { text: (error as Error).message, current } }));
         return null;
       }
-      if (error instanceof PlansApiError && Object.keys(error.fields).length > 0) return error.fields;
+      if (error instanceof ClientError && error.hasFields) return error.fields;
       return { _: error instanceof Error ? error.message : "Could not save." };
     }
   }

@@ -2,6 +2,7 @@
 
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
+import { ClientError, refusal, request } from "@/lib/client/fetch";
 import { projectKey } from "@/lib/client/project-scope";
 
 /** What the person is asked about: the thing, how to delete it, and what goes with it. */
@@ -35,17 +36,17 @@ export function useRemoval(orgSlug: string, projectId: string) {
     setError(null);
     try {
       const sep = pending.path.includes("?") ? "&" : "?";
-      const res = await fetch(`${pending.path}${sep}tags=${pending.tags}`, { method: "DELETE" });
-      if (res.ok) {
-        setPending(null);
+      await request<void>(`${pending.path}${sep}tags=${pending.tags}`, { method: "DELETE" });
+      setPending(null);
+    } catch (failure) {
+      if (!(failure instanceof ClientError)) {
+        setError("Could not reach the server; nothing was deleted.");
         return;
       }
-      const body = (await res.json().catch(() => ({}))) as { error?: string; removes?: { tags: number; openings: number } };
-      setError(body.error ?? `Not deleted (${res.status}).`);
+      setError(failure.message);
       // Someone tagged meanwhile: the question now shows what a delete would take, to confirm afresh.
-      if (body.removes) setPending({ ...pending, ...body.removes });
-    } catch {
-      setError("Could not reach the server; nothing was deleted.");
+      const changed = refusal(failure, "confirm_removal");
+      if (changed) setPending({ ...pending, ...changed.removes });
     } finally {
       setBusy(false);
       refresh();

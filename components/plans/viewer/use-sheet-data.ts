@@ -1,7 +1,7 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { api, ApiError } from "@/lib/api-client";
+import { ClientError, refusal, request } from "@/lib/client/fetch";
 import { countsKey, countsQuery } from "@/lib/client/counts";
 import { openingTypesQuery } from "@/lib/client/opening-types";
 import { projectPath, type ProjectScope } from "@/lib/client/project-scope";
@@ -57,17 +57,16 @@ export function useSheetMutation(scope: SheetScope, onNotice: (tone: "info" | "e
     mutationFn: async (patch: SheetPatch) => {
       const current = qc.getQueryData<SheetView>(keys.sheet(scope));
       const body = { ...patch, version: current?.version ?? 1 };
-      return (await api<{ sheet: SheetView }>(`${projectBase(scope)}/sheets/${scope.sheetId}`, { method: "PATCH", body })).sheet;
+      return (await request<{ sheet: SheetView }>(`${projectBase(scope)}/sheets/${scope.sheetId}`, { method: "PATCH", body })).sheet;
     },
     onSuccess: (sheet) => {
       qc.setQueryData(keys.sheet(scope), sheet);
       void qc.invalidateQueries({ queryKey: keys.sheets(scope) });
     },
     onError: (error) => {
-      if (error instanceof ApiError && error.status === 409 && error.body.current) {
-        qc.setQueryData(keys.sheet(scope), error.body.current as SheetView);
-      }
-      const field = error instanceof ApiError ? Object.values(error.fields)[0] : undefined;
+      const current = refusal(error, "stale")?.current as SheetView | null | undefined;
+      if (current) qc.setQueryData(keys.sheet(scope), current);
+      const field = error instanceof ClientError ? Object.values(error.fields)[0] : undefined;
       onNotice("error", field ? `${error.message} ${field}` : error.message);
     },
   });

@@ -2,7 +2,7 @@
 
 import { useCallback, useMemo, useRef } from "react";
 import { useQueryClient } from "@tanstack/react-query";
-import { api, ApiError } from "@/lib/api-client";
+import { refusal, request, ClientError } from "@/lib/client/fetch";
 import type { TagView } from "@/lib/plans/api-types";
 import type { TagFields, TagPatch } from "@/lib/plans/viewer/undo-stack";
 import { keys, projectBase, type SheetScope, type ViewerTag } from "./use-sheet-data";
@@ -36,11 +36,12 @@ export function useTagMutations(scope: SheetScope, notify: Notify, onGone: (tagI
     void qc.invalidateQueries({ queryKey: keys.sheets(scope) });
   }, [qc, scope]);
 
-  /** 409 carries the tag as it is now (or null); this API answers 404 once it is gone. Either way: show theirs. */
+  /** `stale` carries the tag as it is now (or null); this API answers `not_found` once it is gone. Either way: show theirs. */
   const refused = useCallback(
     (id: string, error: unknown, previous: ViewerTag | undefined) => {
-      if (error instanceof ApiError && (error.status === 409 || error.status === 404)) {
-        const current = error.status === 409 ? ((error.body.current as TagView | null | undefined) ?? null) : null;
+      const stale = refusal(error, "stale");
+      if (error instanceof ClientError && (stale || error.code === "not_found")) {
+        const current = (stale?.current as TagView | null | undefined) ?? null;
         replace(id, current);
         if (!current) onGone(id);
         notify("error", current ? error.message : "Someone else deleted this tag; it is gone from the sheet.");
@@ -60,7 +61,7 @@ export function useTagMutations(scope: SheetScope, notify: Notify, onGone: (tagI
       await qc.cancelQueries({ queryKey: tagsKey });
       setTags((ts) => [...ts, { id: tempId, sheetId: scope.sheetId, ...fields, widthMismatch: false, version: 0, pending: true }]);
       try {
-        const { tag } = await api<{ tag: TagView }>(`${base}/tags`, { method: "POST", body: { sheetId: scope.sheetId, ...fields } });
+        const { tag } = await request<{ tag: TagView }>(`${base}/tags`, { method: "POST", body: { sheetId: scope.sheetId, ...fields } });
         replace(tempId, tag);
         return tag;
       } catch (error) {
@@ -82,7 +83,7 @@ export function useTagMutations(scope: SheetScope, notify: Notify, onGone: (tagI
         await qc.cancelQueries({ queryKey: tagsKey });
         replace(id, { ...before, ...patch });
         try {
-          const { tag } = await api<{ tag: TagView }>(`${base}/tags/${id}`, { method: "PATCH", body: { version: before.version, ...patch } });
+          const { tag } = await request<{ tag: TagView }>(`${base}/tags/${id}`, { method: "PATCH", body: { version: before.version, ...patch } });
           replace(id, tag);
           return tag;
         } catch (error) {
@@ -103,7 +104,7 @@ export function useTagMutations(scope: SheetScope, notify: Notify, onGone: (tagI
         await qc.cancelQueries({ queryKey: tagsKey });
         replace(id, null);
         try {
-          await api<void>(`${base}/tags/${id}?version=${before.version}`, { method: "DELETE" });
+          await request<void>(`${base}/tags/${id}?version=${before.version}`, { method: "DELETE" });
           return true;
         } catch (error) {
           refused(id, error, before);

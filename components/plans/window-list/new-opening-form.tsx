@@ -1,60 +1,51 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
 import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
+import { FormError, SubmitButton } from "@/components/ui/form-error";
 import { Field, TextInput } from "@/components/ui/field";
 import type { OpeningTypeView } from "@/lib/plans/api-types";
 import { tape } from "@/lib/plans/window-list/length-text";
 import { EMPTY_DRAFT, planCreate, type OpeningDraft } from "@/lib/plans/window-list/new-opening";
-import { PlansApiError, plansApi, projectApi } from "@/lib/plans/window-list/request";
+import { request } from "@/lib/client/fetch";
+import { projectPath } from "@/lib/client/project-scope";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { TrimSpecFields } from "./trim-spec-fields";
 import { WallBuildUpFields } from "./wall-build-up-fields";
 
 /** Adds a line to the window list. Lengths are typed as people write them and checked before sending. */
 export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: string; projectId: string; onAdded: (row: OpeningTypeView) => void }) {
   const [draft, setDraft] = useState<OpeningDraft>(EMPTY_DRAFT);
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [added, setAdded] = useState<OpeningTypeView | null>(null);
-  const set = <K extends keyof OpeningDraft>(key: K, value: OpeningDraft[K]) => {
-    setDraft((d) => ({ ...d, [key]: value }));
-    // A message stays only until its field is changed; the next check says whether it still holds.
-    const stale = (k: string) => k === key || k === `trimSpec.${key}` || (key === "wall" && k.startsWith("wallBuildUp."));
-    setErrors((e) => (Object.keys(e).some(stale) ? Object.fromEntries(Object.entries(e).filter(([k]) => !stale(k))) : e));
-  };
-
-  const create = useMutation({
-    mutationFn: (body: unknown) => plansApi<{ openingType: OpeningTypeView }>(`${projectApi(orgSlug, projectId)}/opening-types`, { method: "POST", body }),
+  const create = useFormMutation({
+    mutationFn: (body: unknown) => request<{ openingType: OpeningTypeView }>(`${projectPath({ orgSlug, projectId })}/opening-types`, { method: "POST", body }),
     onSuccess: ({ openingType }) => {
       onAdded(openingType);
       setAdded(openingType);
       // The next line of a window list usually shares the wall and trim: keep those, clear the rest.
       setDraft((d) => ({ ...d, mark: "", width: "", height: "", notes: "" }));
-      setErrors({});
     },
-    onError: (error) => setErrors(error instanceof PlansApiError ? error.fields : {}),
   });
+  const { errors } = create;
+  const set = <K extends keyof OpeningDraft>(key: K, value: OpeningDraft[K]) => {
+    setDraft((d) => ({ ...d, [key]: value }));
+    // A message stays only until its field is changed; the next check says whether it still holds.
+    create.clear((k) => k === key || k === `trimSpec.${key}` || (key === "wall" && k.startsWith("wallBuildUp.")));
+  };
 
   function submit(e: FormEvent) {
     e.preventDefault();
     setAdded(null);
     const plan = planCreate(draft);
-    if (plan.kind === "invalid") {
-      setErrors(plan.fields);
-      create.reset();
-      return;
-    }
-    setErrors({});
-    create.mutate(plan.body);
+    if (plan.kind === "invalid") return create.refuse(plan.fields);
+    create.submit(plan.body);
   }
 
-  const count = Object.keys(errors).length;
   return (
     <Card title="Add an opening type">
       <form onSubmit={submit} className="space-y-4" noValidate>
-        {create.isError && <Notice tone="error">{create.error.message}</Notice>}
-        {!create.isError && count > 0 && <Notice tone="error">{count === 1 ? "One field needs attention." : `${count} fields need attention.`}</Notice>}
+        <FormError form={create} countFields />
         {added && <Notice>Added {added.mark}: {tape(added.width)} × {tape(added.height)}, setback {tape(added.setback)}.</Notice>}
         <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
           <Field label="Mark" name="new-mark" error={errors.mark}>
@@ -96,10 +87,10 @@ export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: strin
           <TextInput name="new-notes" maxLength={500} value={draft.notes} onChange={(e) => set("notes", e.target.value)} error={errors.notes} />
         </Field>
         <div className="flex flex-wrap gap-3">
-          <Button type="submit" disabled={create.isPending}>
-            {create.isPending ? "Adding…" : "Add to window list"}
-          </Button>
-          <Button type="button" look="secondary" onClick={() => (setDraft(EMPTY_DRAFT), setErrors({}), setAdded(null), create.reset())}>
+          <SubmitButton pending={create.pending} busy="Adding…">
+            Add to window list
+          </SubmitButton>
+          <Button type="button" look="secondary" onClick={() => (setDraft(EMPTY_DRAFT), setAdded(null), create.reset())}>
             Clear
           </Button>
         </div>

@@ -2,9 +2,8 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
-import type { PriceGapsView } from "@/lib/server/takeoffs/price-gaps";
 import { priceBooksQuery } from "@/lib/client/price-books";
-import { plansApi, projectApi } from "@/lib/plans/window-list/request";
+import { priceGapsQuery } from "@/lib/client/price-gaps";
 
 /**
  * The window list checked against a price book, re-read whenever the list or the chosen book changes
@@ -13,11 +12,6 @@ import { plansApi, projectApi } from "@/lib/plans/window-list/request";
 export function usePriceGaps(orgSlug: string, projectId: string, typesVersion: string) {
   const [priceBookId, setPriceBookId] = useState<string | null>(null);
   const books = useQuery(priceBooksQuery(orgSlug));
-  const gaps = useQuery({
-    queryKey: ["price-gaps", orgSlug, projectId, priceBookId, typesVersion],
-    queryFn: () =>
-      plansApi<PriceGapsView>(`${projectApi(orgSlug, projectId)}/price-gaps${priceBookId ? `?priceBookId=${encodeURIComponent(priceBookId)}` : ""}`),
-    placeholderData: (previous) => previous,
-  });
+  const gaps = useQuery(priceGapsQuery({ orgSlug, projectId }, priceBookId, typesVersion));
   return { books, gaps, priceBookId: priceBookId ?? gaps.data?.priceBook?.id ?? null, choose: setPriceBookId };
 }

@@ -7,7 +7,8 @@ import { openingTypesKey, openingTypesQuery } from "@/lib/client/opening-types";
 import type { OpeningTypeView } from "@/lib/plans/api-types";
 import { planCellPatch, type CellEdit } from "@/lib/plans/window-list/cell-patch";
 import type { EditableColumn } from "@/lib/plans/window-list/columns";
-import { PlansApiError, plansApi, projectApi } from "@/lib/plans/window-list/request";
+import { ClientError, refusal, request } from "@/lib/client/fetch";
+import { projectPath } from "@/lib/client/project-scope";
 import type { RowNotice, WindowListControls } from "./window-list-context";
 
 type TypesData = OpeningTypeView[];
@@ -15,10 +16,10 @@ type Patch = { row: OpeningTypeView; body: unknown };
 
 /** The window list's data and every edit of it: cell patches, deletes, stale-edit recovery. */
 export function useWindowList(orgSlug: string, projectId: string, canWrite: boolean) {
-  const base = projectApi(orgSlug, projectId);
   const queryClient = useQueryClient();
   // Keys, fetchers and cached shapes come from lib/client: the Plans page and the viewer read these same entries.
   const scope = { orgSlug, projectId };
+  const base = projectPath(scope);
   const typesKey = openingTypesKey(scope);
   const types = useQuery(openingTypesQuery(scope));
   const counts = useQuery(countsQuery(scope));
@@ -35,10 +36,10 @@ export function useWindowList(orgSlug: string, projectId: string, canWrite: bool
   const dropRow = (id: string) =>
     queryClient.setQueryData<TypesData>(typesKey, (old) => (old ? old.filter((r) => r.id !== id) : old));
 
-  /** A 409 with `current`: someone saved first. Show their row and say so; a null `current` means it is gone. */
-  const staleRow = (row: OpeningTypeView, error: PlansApiError<OpeningTypeView>) => {
-    if (error.current) {
-      putRow(error.current);
+  /** A `stale` refusal: someone saved first. Show their row and say so; a null `current` means it is gone. */
+  const staleRow = (row: OpeningTypeView, error: Error, current: OpeningTypeView | null) => {
+    if (current) {
+      putRow(current);
       notify(row.id, { tone: "error", text: error.message });
     } else {
       dropRow(row.id);
@@ -48,19 +49,20 @@ export function useWindowList(orgSlug: string, projectId: string, canWrite: bool
 
   const patch = useMutation({
     mutationFn: ({ row, body }: Patch) =>
-      plansApi<{ openingType: OpeningTypeView }>(`${base}/opening-types/${row.id}`, { method: "PATCH", body }),
+      request<{ openingType: OpeningTypeView }>(`${base}/opening-types/${row.id}`, { method: "PATCH", body }),
   });
   const del = useMutation({
     // `tags`: how many tags the person was told go with the type; the server refuses if that is no longer so.
     mutationFn: (row: OpeningTypeView & { tags?: number }) =>
-      plansApi<void>(`${base}/opening-types/${row.id}?version=${row.version}&tags=${row.tags ?? 0}`, { method: "DELETE" }),
+      request<void>(`${base}/opening-types/${row.id}?version=${row.version}&tags=${row.tags ?? 0}`, { method: "DELETE" }),
     onSuccess: (_, row) => {
       dropRow(row.id);
       notify(row.id, null);
       void queryClient.invalidateQueries({ queryKey: countsKey(scope) });
     },
     onError: (error, row) => {
-      if (error instanceof PlansApiError && error.status === 409 && error.current !== undefined) staleRow(row, error as PlansApiError<OpeningTypeView>);
+      const stale = refusal(error, "stale");
+      if (stale) staleRow(row, error, stale.current as OpeningTypeView | null);
       else notify(row.id, { tone: "error", text: error.message });
     },
   });
@@ -75,13 +77,14 @@ export function useWindowList(orgSlug: string, projectId: string, canWrite: bool
       notify(row.id, null);
       return null;
     } catch (error) {
-      if (!(error instanceof PlansApiError)) return { _: "Could not reach the server; your change is not saved." };
-      if (error.status === 409 && error.current !== undefined) {
-        staleRow(row, error as PlansApiError<OpeningTypeView>);
+      if (!(error instanceof ClientError)) return { _: "Could not reach the server; your change is not saved." };
+      const stale = refusal(error, "stale");
+      if (stale) {
+        staleRow(row, error, stale.current as OpeningTypeView | null);
         return null;
       }
-      // 422, or a 409 naming a field (a mark already used): show it beside the cell.
-      return Object.keys(error.fields).length > 0 ? error.fields : { _: error.message };
+      // 422, or a conflict naming a field (a mark already used): show it beside the cell.
+      return error.hasFields ? error.fields : { _: error.message };
     }
   }
 

@@ -3,25 +3,23 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
-import { api } from "@/lib/api-client";
+import { request } from "@/lib/client/fetch";
+import { membersKey, membersPath, membersQuery } from "@/lib/client/members";
 import { roleLabels } from "@/lib/permissions";
 import type { Role } from "@/db/schema";
 import { InviteForm } from "./invite-form";
 import { PendingInvitations } from "./pending-invitations";
 
-type Member = { id: string; userId: string; name: string; email: string; role: Role };
-
 export function MembersView({ orgSlug, canManage, currentUserId }: { orgSlug: string; canManage: boolean; currentUserId: string }) {
   const queryClient = useQueryClient();
-  const key = ["members", orgSlug];
-  const members = useQuery({ queryKey: key, queryFn: () => api<{ members: Member[] }>(`/api/orgs/${orgSlug}/members`) });
+  const key = membersKey(orgSlug);
+  const members = useQuery(membersQuery(orgSlug));
   const change = useMutation({
-    mutationFn: ({ id, role }: { id: string; role: Role }) =>
-      api(`/api/orgs/${orgSlug}/members/${id}`, { method: "PATCH", body: { role } }),
+    mutationFn: ({ id, role }: { id: string; role: Role }) => request(`${membersPath(orgSlug)}/${id}`, { method: "PATCH", body: { role } }),
     onSettled: () => queryClient.invalidateQueries({ queryKey: key }),
   });
   const remove = useMutation({
-    mutationFn: (id: string) => api(`/api/orgs/${orgSlug}/members/${id}`, { method: "DELETE" }),
+    mutationFn: (id: string) => request(`${membersPath(orgSlug)}/${id}`, { method: "DELETE" }),
     onSettled: () => queryClient.invalidateQueries({ queryKey: key }),
   });
   const error = change.error ?? remove.error;
@@ -44,7 +42,7 @@ export function MembersView({ orgSlug, canManage, currentUserId }: { orgSlug: st
                 </tr>
               </thead>
               <tbody>
-                {members.data.members.map((m) => (
+                {members.data.map((m) => (
                   <tr key={m.id} className="border-b border-maple-100 last:border-0">
                     <td className="py-2 pr-3 font-medium">
                       {m.name}

@@ -3,27 +3,25 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
-import { api } from "@/lib/api-client";
+import { request } from "@/lib/client/fetch";
+import { invitationsKey, invitationsPath, invitationsQuery } from "@/lib/client/invitations";
 import { roleLabels } from "@/lib/permissions";
-import type { Role } from "@/db/schema";
-
-type Pending = { id: string; email: string; role: Role; expiresAt: string };
 
 export function PendingInvitations({ orgSlug }: { orgSlug: string }) {
   const queryClient = useQueryClient();
-  const key = ["invitations", orgSlug];
-  const pending = useQuery({ queryKey: key, queryFn: () => api<{ invitations: Pending[] }>(`/api/orgs/${orgSlug}/invitations`) });
+  const key = invitationsKey(orgSlug);
+  const pending = useQuery(invitationsQuery(orgSlug));
   const withdraw = useMutation({
-    mutationFn: (id: string) => api(`/api/orgs/${orgSlug}/invitations/${id}`, { method: "DELETE" }),
+    mutationFn: (id: string) => request(`${invitationsPath(orgSlug)}/${id}`, { method: "DELETE" }),
     onSettled: () => queryClient.invalidateQueries({ queryKey: key }),
   });
 
-  if (!pending.data || pending.data.invitations.length === 0) return null;
+  if (!pending.data || pending.data.length === 0) return null;
   return (
     <Card title="Pending invitations">
       {withdraw.isError && <Notice tone="error">{withdraw.error.message}</Notice>}
       <ul className="divide-y divide-maple-100 text-sm">
-        {pending.data.invitations.map((i) => (
+        {pending.data.map((i) => (
           <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
             <span>
               {i.email} · {roleLabels[i.role]}

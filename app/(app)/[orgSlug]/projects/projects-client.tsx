@@ -5,18 +5,13 @@ import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Card, Notice } from "@/components/ui/card";
 import { StatusBadge } from "@/components/ui/status-badge";
-import { api } from "@/lib/api-client";
+import { projectsQuery } from "@/lib/client/projects";
 import { formatDate } from "@/lib/format-date";
-import type { ProjectView } from "@/lib/server/projects/projects";
 import { NewProjectForm } from "./new-project-form";
 
 export function ProjectsView({ orgSlug, canWrite }: { orgSlug: string; canWrite: boolean }) {
   const [showArchived, setShowArchived] = useState(false);
-  const query = useQuery({
-    queryKey: ["projects", orgSlug, showArchived],
-    queryFn: () =>
-      api<{ projects: ProjectView[] }>(`/api/orgs/${orgSlug}/projects${showArchived ? "?archived=include" : ""}`),
-  });
+  const query = useQuery(projectsQuery(orgSlug, showArchived));
 
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
@@ -31,10 +26,10 @@ export function ProjectsView({ orgSlug, canWrite }: { orgSlug: string; canWrite:
       >
         {query.isPending && <p className="text-sm text-graphite-600">Loading projects…</p>}
         {query.isError && <Notice tone="error">{query.error.message}</Notice>}
-        {query.data && query.data.projects.length === 0 && (
+        {query.data && query.data.length === 0 && (
           <p className="text-sm text-graphite-600">No projects yet.{canWrite ? " Create the first one." : ""}</p>
         )}
-        {query.data && query.data.projects.length > 0 && (
+        {query.data && query.data.length > 0 && (
           <div className="overflow-x-auto">
             <table className="w-full text-sm">
               <thead className="border-b border-maple-200 text-left text-graphite-600">
@@ -46,7 +41,7 @@ export function ProjectsView({ orgSlug, canWrite }: { orgSlug: string; canWrite:
                 </tr>
               </thead>
               <tbody>
-                {query.data.projects.map((p) => (
+                {query.data.map((p) => (
                   <tr key={p.id} className="border-b border-maple-100 last:border-0">
                     <td className="py-2 pr-3">
                       <Link href={`/${orgSlug}/projects/${p.id}`} className="font-medium text-spruce-700 underline-offset-2 hover:underline">

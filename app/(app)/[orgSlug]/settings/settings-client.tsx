@@ -1,16 +1,15 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
-import { useState, type FormEvent } from "react";
-import { Button } from "@/components/ui/button";
+import type { FormEvent } from "react";
 import { Card, Notice } from "@/components/ui/card";
 import { Field, Select, TextInput } from "@/components/ui/field";
-import { api, ApiError } from "@/lib/api-client";
+import { FormError, SubmitButton } from "@/components/ui/form-error";
+import { saveSettings, type ClientSettings } from "@/lib/client/settings";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
 import { settingsSchema } from "@/lib/validators/settings";
-import { formatLengthExact, parseLength, type TrimSpec } from "@/takeoff";
+import { formatLengthExact, parseLength } from "@/takeoff";
 
-type Settings = { trimDefaults: TrimSpec; trimDefaultsOwn: boolean; kerf: number; wastePercent: number };
 const LENGTHS = ["casingWidth", "casingThickness", "reveal", "stoolHorn", "stoolProjection", "apronInset", "extensionThickness"] as const;
 const LABELS: Record<(typeof LENGTHS)[number], string> = {
   casingWidth: "Casing width",
@@ -31,13 +30,9 @@ const FIELD_NAMES: Record<string, string> = {
 };
 
 /** The company's defaults: what a new window type starts from, and the kerf and waste every takeoff uses. */
-export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; initial: Settings; canWrite: boolean }) {
-  const [local, setLocal] = useState<Record<string, string>>({});
-  const save = useMutation({
-    mutationFn: (body: unknown) => api<{ settings: Settings }>(`/api/orgs/${orgSlug}/settings`, { method: "PATCH", body }),
-  });
-  const fields = save.error instanceof ApiError ? save.error.fields : {};
-  const errors = { ...fields, ...local };
+export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; initial: ClientSettings; canWrite: boolean }) {
+  const save = useFormMutation({ mutationFn: (body: unknown) => saveSettings(orgSlug, body) });
+  const { errors } = save;
 
   const t = initial.trimDefaults;
   // Exact, so a 3/32" kerf shows as 3/32" and not as the 1/8" it would round to.
@@ -45,7 +40,6 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
 
   function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    save.reset();
     const form = Object.fromEntries(new FormData(e.currentTarget)) as Record<string, string>;
     const bad: Record<string, string> = {};
     const spec: Record<string, unknown> = { style: form.style, apronReturns: form.apronReturns === "yes" };
@@ -68,8 +62,8 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
     // The API's own schema over the whole form, so every wrong field is named at once, not the first.
     const checked = settingsSchema.safeParse(body);
     const all = { ...(checked.success ? {} : fieldErrorsOf(checked.error)), ...bad };
-    setLocal(all);
-    if (Object.keys(all).length === 0) save.mutate(body);
+    if (Object.keys(all).length > 0) return save.refuse(all);
+    save.submit(body);
   }
 
   const count = Object.keys(errors).length;
@@ -118,9 +112,9 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
             {count === 1 ? "One field needs" : `${count} fields need`} attention: {Object.entries(errors).map(([k, m]) => `${FIELD_NAMES[k] ?? k}: ${m}`).join(" · ")}
           </Notice>
         )}
-        {save.isError && count === 0 && <Notice tone="error">{save.error.message}</Notice>}
-        {save.isSuccess && <Notice>Saved. New window types and takeoffs use these from now on.</Notice>}
-        {canWrite ? <Button type="submit" disabled={save.isPending}>Save settings</Button> : <p className="text-sm text-graphite-600">Only admins change these.</p>}
+        {count === 0 && <FormError form={save} />}
+        {save.mutation.isSuccess && <Notice>Saved. New window types and takeoffs use these from now on.</Notice>}
+        {canWrite ? <SubmitButton pending={save.pending} busy="Save settings">Save settings</SubmitButton> : <p className="text-sm text-graphite-600">Only admins change these.</p>}
       </form>
     </div>
   );

@@ -2,41 +2,38 @@
 
 import { signIn } from "next-auth/react";
 import { useRouter } from "next/navigation";
-import { useState, type FormEvent } from "react";
-import { Button } from "@/components/ui/button";
-import { Notice } from "@/components/ui/card";
+import type { FormEvent } from "react";
 import { Field, TextInput } from "@/components/ui/field";
-import { api, ApiError } from "@/lib/api-client";
+import { FormError, SubmitButton } from "@/components/ui/form-error";
+import { request } from "@/lib/client/fetch";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 
 export function AcceptInviteForm({ token, email, hasAccount }: { token: string; email: string; hasAccount: boolean }) {
   const router = useRouter();
-  const [error, setError] = useState<string | null>(null);
-  const [fields, setFields] = useState<Record<string, string>>({});
-  const [busy, setBusy] = useState(false);
-
-  async function submit(e: FormEvent<HTMLFormElement>) {
-    e.preventDefault();
-    const form = Object.fromEntries(new FormData(e.currentTarget)) as Record<string, string>;
-    setBusy(true);
-    setError(null);
-    setFields({});
-    try {
-      const joined = await api<{ orgSlug: string }>("/api/invitations/accept", { method: "POST", body: { token, ...form } });
+  const accept = useFormMutation({
+    mutationFn: async (form: Record<string, string>) => {
+      const joined = await request<{ orgSlug: string }>("/api/invitations/accept", { method: "POST", body: { token, ...form } });
       const res = await signIn("credentials", { email, password: form.password, redirect: false });
-      router.push(res?.ok ? `/${joined.orgSlug}/projects` : "/sign-in?joined=1");
+      return res?.ok ? `/${joined.orgSlug}/projects` : "/sign-in?joined=1";
+    },
+    onSuccess: (next) => {
+      router.push(next);
       router.refresh();
-    } catch (err) {
-      setBusy(false);
-      if (err instanceof ApiError) {
-        setError(err.message);
-        setFields(err.fields);
-      } else setError("Could not reach Miterwise. Check your connection and try again.");
-    }
+    },
+    offline: "Could not reach Miterwise. Check your connection and try again.",
+  });
+  const fields = accept.errors;
+  // After success the page is changing: the button stays busy until the next one replaces this.
+  const busy = accept.pending || accept.mutation.isSuccess;
+
+  function submit(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    accept.submit(Object.fromEntries(new FormData(e.currentTarget)) as Record<string, string>);
   }
 
   return (
     <form onSubmit={submit} className="space-y-4" noValidate>
-      {error && <Notice tone="error">{error}</Notice>}
+      <FormError form={accept} />
       {hasAccount ? (
         <p className="text-sm text-graphite-700">You already have a Miterwise account. Enter its password to join.</p>
       ) : (
@@ -52,9 +49,9 @@ export function AcceptInviteForm({ token, email, hasAccount }: { token: string; 
       >
         <TextInput name="password" type="password" autoComplete={hasAccount ? "current-password" : "new-password"} error={fields.password} />
       </Field>
-      <Button type="submit" disabled={busy} className="w-full">
-        {busy ? "Joining…" : "Join"}
-      </Button>
+      <SubmitButton pending={busy} busy="Joining…" className="w-full">
+        Join
+      </SubmitButton>
     </form>
   );
 }

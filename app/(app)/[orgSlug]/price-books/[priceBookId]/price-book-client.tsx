@@ -14,7 +14,7 @@ import { ItemsTable } from "@/components/price-books/items-table";
 import { NewItemForm } from "@/components/price-books/new-item-form";
 import { RatesForm } from "@/components/price-books/rates-form";
 import { usePriceBook } from "@/components/price-books/use-price-book";
-import { api } from "@/lib/api-client";
+import { request } from "@/lib/client/fetch";
 import { priceBooksKey } from "@/lib/client/price-books";
 import { stockLengths } from "@/lib/price-book/csv";
 import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
@@ -24,7 +24,7 @@ export function PriceBookView({ orgSlug, priceBookId, canWrite }: { orgSlug: str
   const router = useRouter();
   const queryClient = useQueryClient();
   const [extra, setExtra] = useState<number[]>([]);
-  const data = book.data?.priceBook;
+  const data = book.data;
   const items = useMemo(() => data?.items ?? [], [data]);
   // Columns are rebuilt only when the set of lengths changes, not on every edit of a price.
   const key = [...stockLengths(items), ...extra.filter((l) => !items.some((i) => i.stock.some((s) => sameLength(s.length, l))))].sort((a, b) => a - b).join(",");
@@ -33,7 +33,7 @@ export function PriceBookView({ orgSlug, priceBookId, canWrite }: { orgSlug: str
   const unsaved = extra.filter((l) => !items.some((i) => i.stock.some((s) => sameLength(s.length, l))));
 
   const remove = useMutation({
-    mutationFn: () => api<void>(`${base}?version=${data?.version}`, { method: "DELETE" }),
+    mutationFn: () => request<void>(`${base}?version=${data?.version}`, { method: "DELETE" }),
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: priceBooksKey(orgSlug) });
       router.push(`/${orgSlug}/price-books`);
@@ -119,7 +119,7 @@ export function PriceBookView({ orgSlug, priceBookId, canWrite }: { orgSlug: str
             />
           )}
           {canWrite && <CsvImport base={base} onApplied={reload} />}
-          <ChangeLog changes={changes.data?.changes} error={changes.error} />
+          <ChangeLog changes={changes.data} error={changes.error} />
         </>
       )}
     </div>

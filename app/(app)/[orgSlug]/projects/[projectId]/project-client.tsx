@@ -1,38 +1,32 @@
 "use client";
 
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useQuery, useQueryClient } from "@tanstack/react-query";
 import type { FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
 import { Field, Select, TextInput } from "@/components/ui/field";
+import { FormError, SubmitButton } from "@/components/ui/form-error";
 import { StatusBadge } from "@/components/ui/status-badge";
-import { api, ApiError } from "@/lib/api-client";
+import { projectDetailsKey, projectListKey, projectQuery, updateProject, type ClientProject, type ProjectPatch } from "@/lib/client/projects";
+import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { formatDate } from "@/lib/format-date";
-import type { ProjectView } from "@/lib/server/projects/projects";
 
-type Patch = Partial<{ name: string; generalContractor: string; bidDue: string; status: string; archived: boolean }>;
-
-export function ProjectDetail({ orgSlug, initial, canWrite }: { orgSlug: string; initial: ProjectView; canWrite: boolean }) {
-  const url = `/api/orgs/${orgSlug}/projects/${initial.id}`;
+export function ProjectDetail({ orgSlug, initial, canWrite }: { orgSlug: string; initial: ClientProject; canWrite: boolean }) {
+  const scope = { orgSlug, projectId: initial.id };
   const queryClient = useQueryClient();
-  const { data } = useQuery({
-    queryKey: ["project", orgSlug, initial.id],
-    queryFn: () => api<{ project: ProjectView }>(url),
-    initialData: { project: initial },
-  });
-  const project = data.project;
-  const save = useMutation({
-    mutationFn: (patch: Patch) => api<{ project: ProjectView }>(url, { method: "PATCH", body: patch }),
-    onSuccess: (result) => {
-      queryClient.setQueryData(["project", orgSlug, initial.id], result);
-      void queryClient.invalidateQueries({ queryKey: ["projects", orgSlug] });
+  const { data: project } = useQuery({ ...projectQuery(scope), initialData: initial });
+  const save = useFormMutation({
+    mutationFn: (patch: ProjectPatch) => updateProject(scope, patch),
+    onSuccess: (saved) => {
+      queryClient.setQueryData(projectDetailsKey(scope), saved);
+      void queryClient.invalidateQueries({ queryKey: projectListKey(orgSlug) });
     },
   });
-  const fields = save.error instanceof ApiError ? save.error.fields : {};
+  const { errors: fields } = save;
 
   function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    save.mutate(Object.fromEntries(new FormData(e.currentTarget)) as Patch);
+    save.submit(Object.fromEntries(new FormData(e.currentTarget)) as ProjectPatch);
   }
 
   return (
@@ -55,13 +49,13 @@ export function ProjectDetail({ orgSlug, initial, canWrite }: { orgSlug: string;
         </Card>
       ) : (
         <Card title="Details">
-          <form onSubmit={submit} className="grid gap-4 sm:grid-cols-2" noValidate key={project.updatedAt.toString()}>
-            {save.isError && (
+          <form onSubmit={submit} className="grid gap-4 sm:grid-cols-2" noValidate key={project.updatedAt.getTime()}>
+            {save.formError && (
               <div className="sm:col-span-2">
-                <Notice tone="error">{save.error.message}</Notice>
+                <FormError form={save} />
               </div>
             )}
-            {save.isSuccess && (
+            {save.mutation.isSuccess && (
               <div className="sm:col-span-2">
                 <Notice>Saved.</Notice>
               </div>
@@ -93,10 +87,10 @@ export function ProjectDetail({ orgSlug, initial, canWrite }: { orgSlug: string;
               </div>
             )}
             <div className="flex flex-wrap gap-3 sm:col-span-2">
-              <Button type="submit" disabled={save.isPending}>
-                {save.isPending ? "Saving…" : "Save changes"}
-              </Button>
-              <Button type="button" look="secondary" disabled={save.isPending} onClick={() => save.mutate({ archived: !project.archivedAt })}>
+              <SubmitButton pending={save.pending} busy="Saving…">
+                Save changes
+              </SubmitButton>
+              <Button type="button" look="secondary" disabled={save.pending} onClick={() => save.submit({ archived: !project.archivedAt })}>
                 {project.archivedAt ? "Restore from archive" : "Archive project"}
               </Button>
             </div>

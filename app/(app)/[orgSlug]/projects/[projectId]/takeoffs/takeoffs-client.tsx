@@ -5,8 +5,8 @@ import Link from "next/link";
 import { Notice } from "@/components/ui/card";
 import { RunTakeoffForm, type CasingChoice, type PriceBookChoice } from "@/components/takeoffs/run-takeoff-form";
 import { TakeoffList } from "@/components/takeoffs/takeoff-list";
-import { api } from "@/lib/api-client";
-import { takeoffsApi, takeoffsPage, type TakeoffListItem } from "@/lib/takeoffs/view";
+import { takeoffsQuery } from "@/lib/client/takeoffs";
+import { takeoffsPage } from "@/lib/takeoffs/view";
 
 export function TakeoffsView({
   orgSlug,
@@ -23,12 +23,9 @@ export function TakeoffsView({
   priceBooks: PriceBookChoice[];
   casings: CasingChoice[];
 }) {
-  const listKey = ["takeoffs", orgSlug, projectId] as const;
-  const list = useQuery({
-    queryKey: listKey,
-    queryFn: () => api<{ takeoffs: TakeoffListItem[] }>(takeoffsApi(orgSlug, projectId)),
-  });
-  const takeoffs = list.data?.takeoffs;
+  const scope = { orgSlug, projectId };
+  const list = useQuery(takeoffsQuery(scope));
+  const takeoffs = list.data;
 
   return (
     <div className="space-y-6">
@@ -50,7 +47,7 @@ export function TakeoffsView({
         <TakeoffList
           takeoffs={takeoffs}
           pageBase={takeoffsPage(orgSlug, projectId)}
-          edit={canRun ? { apiBase: takeoffsApi(orgSlug, projectId), listKey } : undefined}
+          edit={canRun ? scope : undefined}
         />
       )}
       {canRun && priceBooks.length === 0 && (

@@ -12,8 +12,8 @@ import { PrintSheet } from "@/components/takeoffs/print-sheet";
 import { TakeoffHeader } from "@/components/takeoffs/takeoff-header";
 import { UnitTypeTotals } from "@/components/takeoffs/unit-type-totals";
 import { TakeoffActions } from "@/components/takeoff-actions/takeoff-actions";
-import { api } from "@/lib/api-client";
-import { takeoffsApi, takeoffsPage, type TakeoffDetail } from "@/lib/takeoffs/view";
+import { takeoffQuery } from "@/lib/client/takeoffs";
+import { takeoffsPage, type TakeoffDetail } from "@/lib/takeoffs/view";
 
 function Part({ id, title, intro, children }: { id: string; title: string; intro?: string; children: ReactNode }) {
   return (
@@ -44,13 +44,7 @@ export function TakeoffResultView({
   canRun: boolean;
 }) {
   // Figures never change once saved; the query only keeps the status (draft or submitted) current.
-  const { data } = useQuery({
-    queryKey: ["takeoff", orgSlug, projectId, initial.id],
-    queryFn: () => api<{ takeoff: TakeoffDetail }>(`${takeoffsApi(orgSlug, projectId)}/${initial.id}`),
-    initialData: { takeoff: initial },
-    staleTime: 60_000,
-  });
-  const t = data.takeoff;
+  const { data: t } = useQuery({ ...takeoffQuery({ orgSlug, projectId, takeoffId: initial.id }), initialData: initial, staleTime: 60_000 });
   const { result, prices } = t;
   return (
     <div className="space-y-8">

@@ -2,8 +2,8 @@
 
 import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
-import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
-import { stockLength } from "@/lib/validators/price-book";
+import { sameLength, stockLengthText } from "@/lib/price-books/length-text";
+import { stockLength } from "@/lib/validators/price-books";
 
 /**
  * Adds an empty price column for a stock length no item is sold in yet, so prices for it can be typed

@@ -1,8 +1,8 @@
 "use client";
 
 import { Card, Notice } from "@/components/ui/card";
-import { FIELD_LABELS, formatValue } from "@/lib/price-book/describe";
-import type { PriceBookChangeView } from "@/lib/price-book/types";
+import { FIELD_LABELS, formatValue } from "@/lib/price-books/describe";
+import type { PriceBookChangeView } from "@/lib/price-books/types";
 
 const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short" });
 

@@ -5,9 +5,9 @@ import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
 import { ClientError, refusal, request } from "@/lib/client/fetch";
 import { useFormMutation } from "@/lib/client/use-form-mutation";
-import { BASE_COLUMNS } from "@/lib/price-book/csv";
-import { decodeCsvBytes, type CsvEncoding } from "@/lib/price-book/csv-encoding";
-import type { ImportMode, ImportPlan } from "@/lib/price-book/import-plan";
+import { BASE_COLUMNS } from "@/lib/price-books/csv";
+import { decodeCsvBytes, type CsvEncoding } from "@/lib/price-books/csv-encoding";
+import type { ImportMode, ImportPlan } from "@/lib/price-books/import-plan";
 import { ImportPreview } from "./import-preview";
 
 type Preview = ImportPlan & { previewToken: string };

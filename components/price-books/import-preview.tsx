@@ -1,8 +1,8 @@
 "use client";
 
-import type { ImportAction, ImportPlan } from "@/lib/price-book/import-plan";
-import { describeDiff, itemDetails, itemLabel } from "@/lib/price-book/describe";
-import { KIND_LABELS } from "@/lib/price-book/kinds";
+import type { ImportAction, ImportPlan } from "@/lib/price-books/import-plan";
+import { describeDiff, itemDetails, itemLabel } from "@/lib/price-books/describe";
+import { KIND_LABELS } from "@/lib/price-books/kinds";
 
 // Each action has its own mark and word, so colour never carries the meaning alone.
 const ACTION_LOOK: Record<ImportAction | "delete", { mark: string; word: string; className: string }> = {

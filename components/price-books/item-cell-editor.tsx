@@ -3,8 +3,8 @@
 import { useState } from "react";
 import { CellEditorShell } from "@/components/ui/editable-table/cell-editor-shell";
 import { CellInput, CellSelect } from "@/components/ui/editable-table/cell-fields";
-import { KIND_OPTIONS, columnLabel, editText, priceColumnLength, type ItemColumn } from "@/lib/price-book/item-edit";
-import type { PriceBookItemView } from "@/lib/price-book/types";
+import { KIND_OPTIONS, columnLabel, editText, priceColumnLength, type ItemColumn } from "@/lib/price-books/item-edit";
+import type { PriceBookItemView } from "@/lib/price-books/types";
 import { useItemsControls } from "./items-context";
 
 const PLACEHOLDERS: Partial<Record<string, string>> = { faceWidth: "2 1/2", thickness: "11/16", species: "Poplar", supplierCode: "none" };

@@ -1,8 +1,8 @@
 "use client";
 
 import { EditableCell } from "@/components/ui/editable-table/editable-cell";
-import { cellText, columnLabel, type ItemColumn } from "@/lib/price-book/item-edit";
-import type { PriceBookItemView } from "@/lib/price-book/types";
+import { cellText, columnLabel, type ItemColumn } from "@/lib/price-books/item-edit";
+import type { PriceBookItemView } from "@/lib/price-books/types";
 import { ItemCellEditor } from "./item-cell-editor";
 
 /** One cell of the items table: plain text for readers; for admins a button that opens its editor. */

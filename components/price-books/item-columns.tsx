@@ -2,9 +2,9 @@
 
 import { deleteColumn, editableColumns } from "@/components/ui/editable-table/columns";
 import { DeleteRowButton } from "@/components/ui/delete-row-button";
-import { COLUMN_LABELS, priceColumnId, type ItemColumn } from "@/lib/price-book/item-edit";
-import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
-import type { PriceBookItemView } from "@/lib/price-book/types";
+import { COLUMN_LABELS, priceColumnId, type ItemColumn } from "@/lib/price-books/item-edit";
+import { sameLength, stockLengthText } from "@/lib/price-books/length-text";
+import type { PriceBookItemView } from "@/lib/price-books/types";
 import { ItemCell } from "./item-cell";
 
 const helper = editableColumns<PriceBookItemView>();

@@ -1,8 +1,8 @@
 "use client";
 
 import { controlsContext, type EditableControls, type FieldErrors } from "@/components/ui/editable-table/context";
-import type { ItemColumn } from "@/lib/price-book/item-edit";
-import type { PriceBookItemView } from "@/lib/price-book/types";
+import type { ItemColumn } from "@/lib/price-books/item-edit";
+import type { PriceBookItemView } from "@/lib/price-books/types";
 
 export type { RowNotice } from "@/components/ui/editable-table/context";
 

@@ -2,8 +2,8 @@
 
 import { useMemo } from "react";
 import { EditableTable, type EditableTableSpec } from "@/components/ui/editable-table/editable-table";
-import { KIND_OPTIONS } from "@/lib/price-book/item-edit";
-import type { PriceBookItemView } from "@/lib/price-book/types";
+import { KIND_OPTIONS } from "@/lib/price-books/item-edit";
+import type { PriceBookItemView } from "@/lib/price-books/types";
 import { buildColumns } from "./item-columns";
 import { useItemsControls } from "./items-context";
 

@@ -7,9 +7,9 @@ import { FormError, SubmitButton } from "@/components/ui/form-error";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { request } from "@/lib/client/fetch";
 import { useFormMutation } from "@/lib/client/use-form-mutation";
-import { emptyItemDraft, planNewItem, type NewItemDraft } from "@/lib/price-book/forms";
-import { KIND_LABELS, MATERIAL_KINDS, type MaterialKind } from "@/lib/price-book/kinds";
-import type { PriceBookItemView } from "@/lib/price-book/types";
+import { emptyItemDraft, planNewItem, type NewItemDraft } from "@/lib/price-books/forms";
+import { KIND_LABELS, MATERIAL_KINDS, type MaterialKind } from "@/lib/price-books/kinds";
+import type { PriceBookItemView } from "@/lib/price-books/types";
 
 const cellInput = "w-full rounded-md border border-graphite-400 bg-white px-2 py-1.5 text-sm text-graphite-900 placeholder:text-graphite-500 aria-[invalid=true]:border-alarm-600";
 

@@ -10,8 +10,8 @@ import { request } from "@/lib/client/fetch";
 import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { priceBooksKey, priceBooksPath } from "@/lib/client/price-books";
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
-import type { PriceBookSummary } from "@/lib/price-book/types";
-import { priceBookCreateSchema } from "@/lib/validators/price-book";
+import type { PriceBookSummary } from "@/lib/price-books/types";
+import { priceBookCreateSchema } from "@/lib/validators/price-books";
 
 /** A new, empty book; its rates start at zero and are set on the book's page, where it opens. */
 export function NewPriceBookForm({ orgSlug }: { orgSlug: string }) {

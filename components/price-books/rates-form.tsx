@@ -6,9 +6,9 @@ import { SubmitButton } from "@/components/ui/form-error";
 import { Field, TextInput } from "@/components/ui/field";
 import { ClientError, refusal, request } from "@/lib/client/fetch";
 import { useFormMutation } from "@/lib/client/use-form-mutation";
-import { planRates, rateFieldOf, ratesDraft, type RatesDraft } from "@/lib/price-book/forms";
-import { formatMoney, percentText } from "@/lib/price-book/numbers";
-import type { PriceBookSummary } from "@/lib/price-book/types";
+import { planRates, rateFieldOf, ratesDraft, type RatesDraft } from "@/lib/price-books/forms";
+import { formatMoney, percentText } from "@/lib/price-books/numbers";
+import type { PriceBookSummary } from "@/lib/price-books/types";
 
 type TextKey = Exclude<keyof RatesDraft, "taxLabour">;
 const FIELDS: { key: TextKey; label: string; hint: string; unit?: string }[] = [

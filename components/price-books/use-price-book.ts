@@ -3,9 +3,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { ClientError, refusal, request } from "@/lib/client/fetch";
-import { priceBookChangesKey, priceBookChangesQuery, priceBookKey, priceBookPath, priceBookQuery } from "@/lib/client/price-book";
-import { columnOfField, planItemEdit, priceColumnLength, type ItemColumn } from "@/lib/price-book/item-edit";
-import type { PriceBookItemView, PriceBookSummary } from "@/lib/price-book/types";
+import { priceBookChangesKey, priceBookChangesQuery, priceBookKey, priceBookPath, priceBookQuery } from "@/lib/client/price-books";
+import { columnOfField, planItemEdit, priceColumnLength, type ItemColumn } from "@/lib/price-books/item-edit";
+import type { PriceBookItemView, PriceBookSummary } from "@/lib/price-books/types";
 import type { ItemsControls, RowNotice } from "./items-context";
 
 /** The book, its change log, and every edit of its items: cell patches, deletes, stale-edit recovery. */

@@ -3,7 +3,7 @@ import { db } from "../client";
 import { priceBooks } from "../schema";
 import { createPriceBook } from "@/lib/server/price-books/books";
 import { createPriceBookItem } from "@/lib/server/price-books/items";
-import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
+import { priceBookItemCreateSchema } from "@/lib/validators/price-books";
 import { seedOnce } from "./seed-marks";
 
 /**

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
 import { AppError } from "@/lib/errors";
-import { priceBookItemCreateSchema, priceBookUpdateSchema } from "@/lib/validators/price-book";
+import { priceBookItemCreateSchema, priceBookUpdateSchema } from "@/lib/validators/price-books";
 import { tagUpdateSchema, unitTypeSchema } from "@/lib/validators/plans";
 import { isJsonMediaType, parseStrict, readJson } from "./read-input";
 

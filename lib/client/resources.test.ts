@@ -12,7 +12,7 @@ import { invitationsKey } from "./invitations";
 import { membersKey } from "./members";
 import { openingTypesKey } from "./opening-types";
 import { planSetsQuery } from "./plan-sets";
-import { priceBookChangesKey, priceBookKey } from "./price-book";
+import { priceBookChangesKey, priceBookKey } from "./price-books";
 import { priceBooksKey } from "./price-books";
 import { priceGapsQuery } from "./price-gaps";
 import { projectDetailsKey, projectsQuery } from "./projects";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseCsv } from "@/lib/price-book/csv-grammar";
+import { parseCsv } from "@/lib/price-books/csv-grammar";
 import { writeCsv } from "./write";
 
 describe("writeCsv", () => {

@@ -1,5 +1,5 @@
 import { expect, it } from "vitest";
-import { parseCsv } from "@/lib/price-book/csv-grammar";
+import { parseCsv } from "@/lib/price-books/csv-grammar";
 import { computeTakeoff } from "@/takeoff";
 import { testInputs, testPrices } from "@/takeoff/testing/job-fixtures";
 import { orderCsv } from "./order-csv";

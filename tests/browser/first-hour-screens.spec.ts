@@ -10,7 +10,7 @@ import { db } from "@/db/client";
 import { priceBooks } from "@/db/schema";
 import { createPriceBookItem } from "@/lib/server/price-books/items";
 import { runTakeoff } from "@/lib/server/takeoffs/run-takeoff";
-import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
+import { priceBookItemCreateSchema } from "@/lib/validators/price-books";
 import { seedBidWorld } from "./bid-world";
 import { runId, signIn, signOut } from "./helpers";
 

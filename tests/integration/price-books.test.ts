@@ -6,7 +6,7 @@ import * as bookRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/r
 import * as csvRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/csv/route";
 import * as changesRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/changes/route";
 import type { ImportPreview } from "@/lib/server/price-books/import";
-import type { PriceBookChangeView, PriceBookItemView, PriceBookView } from "@/lib/price-book/types";
+import type { PriceBookChangeView, PriceBookItemView, PriceBookView } from "@/lib/price-books/types";
 import { call, sessionCookie } from "./helpers/http";
 import { priceBookApi, type PriceBookApi } from "./helpers/price-book-world";
 import { snapshot } from "./helpers/snapshot";

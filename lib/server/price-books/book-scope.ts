@@ -1,7 +1,7 @@
 import type { Tx } from "@/db/client";
-import { findBookSummary, listItems, lockPriceBook, type PriceBookScope } from "@/db/queries/price-book-scope";
+import { findBookSummary, listItems, lockPriceBook, type PriceBookScope } from "@/db/queries/price-books/scope";
 import { orNotFound } from "@/lib/errors";
-import type { PriceBookItemView, PriceBookSummary } from "@/lib/price-book/types";
+import type { PriceBookItemView, PriceBookSummary } from "@/lib/price-books/types";
 
 export const MISSING_BOOK = "No such price book.";
 

@@ -1,12 +1,12 @@
 import { db, type Tx } from "@/db/client";
-import { recordChanges } from "@/db/queries/price-book-changes";
-import type { PriceBookScope } from "@/db/queries/price-book-scope";
-import { deleteBookAt, insertBook, isBookNameTaken, listPriceBooks as bookRows, lockBookNames, updateBookAt } from "@/db/queries/price-books";
+import { recordChanges } from "@/db/queries/price-books/changes";
+import type { PriceBookScope } from "@/db/queries/price-books/scope";
+import { deleteBookAt, insertBook, isBookNameTaken, listPriceBooks as bookRows, lockBookNames, updateBookAt } from "@/db/queries/price-books/books";
 import { conflict, stale } from "@/lib/errors";
-import { bookDiff, type BookFields } from "@/lib/price-book/diff";
-import { bookSummary } from "@/lib/price-book/describe";
-import type { PriceBookListEntry, PriceBookSummary, PriceBookView } from "@/lib/price-book/types";
-import type { PriceBookCreateInput, PriceBookUpdateInput } from "@/lib/validators/price-book";
+import { bookDiff, type BookFields } from "@/lib/price-books/diff";
+import { bookSummary } from "@/lib/price-books/describe";
+import type { PriceBookListEntry, PriceBookSummary, PriceBookView } from "@/lib/price-books/types";
+import type { PriceBookCreateInput, PriceBookUpdateInput } from "@/lib/validators/price-books";
 import type { LabourRates } from "@/takeoff";
 import { itemsOf, requireBook, requireLockedBook } from "./book-scope";
 

@@ -1,6 +1,6 @@
-import { listChangeRows, MAX_CHANGES } from "@/db/queries/price-book-changes";
-import type { PriceBookScope } from "@/db/queries/price-book-scope";
-import type { PriceBookChangeView } from "@/lib/price-book/types";
+import { listChangeRows, MAX_CHANGES } from "@/db/queries/price-books/changes";
+import type { PriceBookScope } from "@/db/queries/price-books/scope";
+import type { PriceBookChangeView } from "@/lib/price-books/types";
 import { requireBook } from "./book-scope";
 
 export { MAX_CHANGES };

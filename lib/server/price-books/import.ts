@@ -1,14 +1,14 @@
 import { createHash } from "node:crypto";
 import { db } from "@/db/client";
-import { deleteItems, insertItems, updateItemAt } from "@/db/queries/price-book-items";
-import { recordChanges, type ChangeEntry } from "@/db/queries/price-book-changes";
-import type { PriceBookScope, PriceBookWriter } from "@/db/queries/price-book-scope";
+import { deleteItems, insertItems, updateItemAt } from "@/db/queries/price-books/items";
+import { recordChanges, type ChangeEntry } from "@/db/queries/price-books/changes";
+import type { PriceBookScope, PriceBookWriter } from "@/db/queries/price-books/scope";
 import { AppError } from "@/lib/errors";
-import { readItemsCsv } from "@/lib/price-book/csv";
-import { itemSummary } from "@/lib/price-book/describe";
-import { itemDiff } from "@/lib/price-book/diff";
-import { planImport, type ImportMode, type ImportPlan } from "@/lib/price-book/import-plan";
-import type { PriceBookItemView } from "@/lib/price-book/types";
+import { readItemsCsv } from "@/lib/price-books/csv";
+import { itemSummary } from "@/lib/price-books/describe";
+import { itemDiff } from "@/lib/price-books/diff";
+import { planImport, type ImportMode, type ImportPlan } from "@/lib/price-books/import-plan";
+import type { PriceBookItemView } from "@/lib/price-books/types";
 import { itemsOf as listItems, requireBook, requireLockedBook } from "./book-scope";
 
 export type ImportPreview = ImportPlan & { previewToken: string };

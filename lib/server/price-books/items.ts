@@ -1,13 +1,13 @@
 import { db, type Tx } from "@/db/client";
-import { deleteItemAt, findItem, insertItems, updateItemAt } from "@/db/queries/price-book-items";
-import { recordChanges } from "@/db/queries/price-book-changes";
-import type { PriceBookScope, PriceBookWriter } from "@/db/queries/price-book-scope";
+import { deleteItemAt, findItem, insertItems, updateItemAt } from "@/db/queries/price-books/items";
+import { recordChanges } from "@/db/queries/price-books/changes";
+import type { PriceBookScope, PriceBookWriter } from "@/db/queries/price-books/scope";
 import { conflict, orNotFound, stale } from "@/lib/errors";
-import { itemSummary } from "@/lib/price-book/describe";
-import { itemDiff } from "@/lib/price-book/diff";
-import { findClash } from "@/lib/price-book/identity";
-import type { ItemFields, PriceBookItemView } from "@/lib/price-book/types";
-import type { PriceBookItemCreateInput, PriceBookItemUpdateInput } from "@/lib/validators/price-book";
+import { itemSummary } from "@/lib/price-books/describe";
+import { itemDiff } from "@/lib/price-books/diff";
+import { findClash } from "@/lib/price-books/identity";
+import type { ItemFields, PriceBookItemView } from "@/lib/price-books/types";
+import type { PriceBookItemCreateInput, PriceBookItemUpdateInput } from "@/lib/validators/price-books";
 import { itemsOf, requireLockedBook } from "./book-scope";
 
 const MISSING_ITEM = "No such item in this price book.";

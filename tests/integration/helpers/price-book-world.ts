@@ -8,8 +8,8 @@ import * as csvRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/cs
 import * as changesRoute from "@/app/api/orgs/[orgSlug]/price-books/[priceBookId]/changes/route";
 import { createPriceBook } from "@/lib/server/price-books/books";
 import { createPriceBookItem } from "@/lib/server/price-books/items";
-import type { PriceBookChangeView, PriceBookView } from "@/lib/price-book/types";
-import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
+import type { PriceBookChangeView, PriceBookView } from "@/lib/price-books/types";
+import { priceBookItemCreateSchema } from "@/lib/validators/price-books";
 import { call, sessionCookie } from "./http";
 // Types only: world.ts imports this file to build its organisations.
 import type { Person, World } from "./world";

@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
 import { Card, Notice } from "@/components/ui/card";
 import { NewPriceBookForm } from "@/components/price-books/new-price-book-form";
-import { formatMoney, percentText } from "@/lib/price-book/numbers";
+import { formatMoney, percentText } from "@/lib/price-books/numbers";
 import { priceBooksQuery } from "@/lib/client/price-books";
 
 const updated = new Intl.DateTimeFormat("en-US", { dateStyle: "medium" });

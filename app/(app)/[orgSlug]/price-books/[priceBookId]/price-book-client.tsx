@@ -16,8 +16,8 @@ import { RatesForm } from "@/components/price-books/rates-form";
 import { usePriceBook } from "@/components/price-books/use-price-book";
 import { request } from "@/lib/client/fetch";
 import { priceBooksKey } from "@/lib/client/price-books";
-import { stockLengths } from "@/lib/price-book/csv";
-import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
+import { stockLengths } from "@/lib/price-books/csv";
+import { sameLength, stockLengthText } from "@/lib/price-books/length-text";
 
 export function PriceBookView({ orgSlug, priceBookId, canWrite }: { orgSlug: string; priceBookId: string; canWrite: boolean }) {
   const { base, book, changes, controls, putItem, putBook, reload, logged } = usePriceBook(orgSlug, priceBookId, canWrite);

@@ -3,7 +3,7 @@ import { NextResponse } from "next/server";
 import { createPriceBook, listPriceBooks } from "@/lib/server/price-books/books";
 import { withOrg } from "@/lib/api/with-org";
 import { readJson } from "@/lib/api/read-input";
-import { priceBookCreateSchema } from "@/lib/validators/price-book";
+import { priceBookCreateSchema } from "@/lib/validators/price-books";
 
 export const GET = withOrg(async ({ org }) => NextResponse.json({ priceBooks: await listPriceBooks({ orgId: org.orgId }) }), {
   permission: "priceBook.read",

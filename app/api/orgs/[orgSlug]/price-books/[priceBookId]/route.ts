@@ -3,7 +3,7 @@ import { NextResponse } from "next/server";
 import { deletePriceBook, getPriceBook, updatePriceBook } from "@/lib/server/price-books/books";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId, readJson, readVersion } from "@/lib/api/read-input";
-import { priceBookUpdateSchema } from "@/lib/validators/price-book";
+import { priceBookUpdateSchema } from "@/lib/validators/price-books";
 
 type Params = { orgSlug: string; priceBookId: string };
 

@@ -5,8 +5,8 @@ import { applyPriceBookImport, previewPriceBookImport } from "@/lib/server/price
 import { withOrg } from "@/lib/api/with-org";
 import { parseId } from "@/lib/api/read-input";
 import { AppError, fieldErrors, invalid } from "@/lib/errors";
-import { csvFileName, itemsToCsv } from "@/lib/price-book/csv";
-import { csvImportSchema } from "@/lib/validators/price-book";
+import { csvFileName, itemsToCsv } from "@/lib/price-books/csv";
+import { csvImportSchema } from "@/lib/validators/price-books";
 
 type Params = { orgSlug: string; priceBookId: string };
 

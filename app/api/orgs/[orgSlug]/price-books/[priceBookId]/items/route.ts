@@ -3,7 +3,7 @@ import { NextResponse } from "next/server";
 import { createPriceBookItem } from "@/lib/server/price-books/items";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId, readJson } from "@/lib/api/read-input";
-import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
+import { priceBookItemCreateSchema } from "@/lib/validators/price-books";
 
 type Params = { orgSlug: string; priceBookId: string };
 

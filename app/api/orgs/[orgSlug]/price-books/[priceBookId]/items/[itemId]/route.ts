@@ -3,7 +3,7 @@ import { NextResponse } from "next/server";
 import { deletePriceBookItem, updatePriceBookItem } from "@/lib/server/price-books/items";
 import { withOrg } from "@/lib/api/with-org";
 import { parseId, readJson, readVersion } from "@/lib/api/read-input";
-import { priceBookItemUpdateSchema } from "@/lib/validators/price-book";
+import { priceBookItemUpdateSchema } from "@/lib/validators/price-books";
 
 type Params = { orgSlug: string; priceBookId: string; itemId: string };
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { materialKindEnum } from "@/db/tables/price-books";
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
-import { labourSchema, priceBookCreateSchema, priceBookItemCreateSchema, priceBookItemUpdateSchema, priceBookUpdateSchema } from "@/lib/validators/price-book";
+import { labourSchema, priceBookCreateSchema, priceBookItemCreateSchema, priceBookItemUpdateSchema, priceBookUpdateSchema } from "@/lib/validators/price-books";
 import { labourRatesSchema } from "@/takeoff";
 import { MATERIAL_KINDS, readKind } from "./kinds";
 

@@ -1,7 +1,7 @@
 import { and, asc, eq, sql } from "drizzle-orm";
-import { db, type Tx } from "../client";
-import { priceBookItems, priceBooks } from "../schema";
-import { bookFields, bookWhere, type PriceBookScope } from "./price-book-scope";
+import { db, type Tx } from "../../client";
+import { priceBookItems, priceBooks } from "../../schema";
+import { bookFields, bookWhere, type PriceBookScope } from "./scope";
 
 type BookValues = Pick<typeof priceBooks.$inferInsert, "name" | "labour" | "markup" | "taxRate" | "taxLabour">;
 

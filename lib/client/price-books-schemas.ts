@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { MATERIAL_KINDS } from "@/lib/price-book/kinds";
-import type { PriceBookChangeView, PriceBookItemView, PriceBookListEntry, PriceBookSummary, PriceBookView } from "@/lib/price-book/types";
+import { MATERIAL_KINDS } from "@/lib/price-books/kinds";
+import type { PriceBookChangeView, PriceBookItemView, PriceBookListEntry, PriceBookSummary, PriceBookView } from "@/lib/price-books/types";
 
 /**
  * What the price-book routes answer, as zod schemas the fetchers parse with; `satisfies` keeps each in step with

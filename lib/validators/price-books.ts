@@ -1,7 +1,7 @@
 import { z } from "zod";
-import { MATERIAL_KINDS } from "@/lib/price-book/kinds";
-import { sameLength, stockLengthText } from "@/lib/price-book/length-text";
-import { readDecimal } from "@/lib/price-book/numbers";
+import { MATERIAL_KINDS } from "@/lib/price-books/kinds";
+import { sameLength, stockLengthText } from "@/lib/price-books/length-text";
+import { readDecimal } from "@/lib/price-books/numbers";
 import { optionalText, text, version } from "./common";
 import { lengthInput } from "./length";
 

@@ -1,6 +1,6 @@
 import { and, asc, eq, sql } from "drizzle-orm";
-import { db, type Tx } from "../client";
-import { priceBookItems, priceBooks } from "../schema";
+import { db, type Tx } from "../../client";
+import { priceBookItems, priceBooks } from "../../schema";
 
 /** What every price-book query takes: the tenant from the session, the book from the URL. */
 export interface PriceBookScope {

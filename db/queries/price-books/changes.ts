@@ -1,7 +1,7 @@
 import { and, desc, eq, sql } from "drizzle-orm";
-import { db, type Tx } from "../client";
-import { priceBookChanges, users } from "../schema";
-import type { PriceBookScope, PriceBookWriter } from "./price-book-scope";
+import { db, type Tx } from "../../client";
+import { priceBookChanges, users } from "../../schema";
+import type { PriceBookScope, PriceBookWriter } from "./scope";
 
 export type ChangeAction = "book.create" | "book.update" | "book.delete" | "item.create" | "item.update" | "item.delete" | "import";
 

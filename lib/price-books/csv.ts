@@ -1,5 +1,5 @@
 import { formatLengthExact, parseLength } from "@/takeoff";
-import { priceBookItemCreateSchema } from "@/lib/validators/price-book";
+import { priceBookItemCreateSchema } from "@/lib/validators/price-books";
 import { writeCsv } from "@/lib/csv/write";
 import { parseCsv } from "./csv-grammar";
 import { hasReplacementCharacter, SAVE_AS_UTF8 } from "./csv-encoding";

@@ -1,5 +1,5 @@
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
-import { priceBookItemCreateSchema, priceBookUpdateSchema } from "@/lib/validators/price-book";
+import { priceBookItemCreateSchema, priceBookUpdateSchema } from "@/lib/validators/price-books";
 import { bookDiff } from "./diff";
 import type { MaterialKind } from "./kinds";
 import { moneyText, percentText, readPercent } from "./numbers";

@@ -1,7 +1,7 @@
 import { and, eq, inArray, sql } from "drizzle-orm";
-import { db, type Tx } from "../client";
-import { priceBookItems } from "../schema";
-import { itemFields, itemWhere, type PriceBookScope } from "./price-book-scope";
+import { db, type Tx } from "../../client";
+import { priceBookItems } from "../../schema";
+import { itemFields, itemWhere, type PriceBookScope } from "./scope";
 
 export type ItemValues = Pick<typeof priceBookItems.$inferInsert, "name" | "kind" | "faceWidth" | "thickness" | "species" | "supplierCode" | "stock">;
 

@@ -1,5 +1,5 @@
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
-import { priceBookItemUpdateSchema } from "@/lib/validators/price-book";
+import { priceBookItemUpdateSchema } from "@/lib/validators/price-books";
 import { itemDiff } from "./diff";
 import { KIND_LABELS, MATERIAL_KINDS } from "./kinds";
 import { sameLength, sizeText, stockLengthText } from "./length-text";

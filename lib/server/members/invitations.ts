@@ -12,7 +12,7 @@ import {
 import { isMemberByEmail } from "@/db/queries/memberships";
 import { getUserByEmail } from "@/db/queries/users";
 import type { Role } from "@/db/schema";
-import { conflict, gone, notFound } from "@/lib/errors";
+import { conflict, gone, notFound, orNotFound } from "@/lib/errors";
 import { hashInviteToken, INVITE_LIFETIME_MS, newInviteToken } from "@/lib/auth/invite-token";
 
 export const pendingInvitationsOf = (org: { orgId: string }) => listPendingInvitations(org);
@@ -62,8 +62,10 @@ const superseded = () =>
 
 /** Looks a token up and says, in words a person understands, why it cannot be used. */
 export async function describeInvitation(token: string) {
-  const row = await findInvitationByTokenHash(hashInviteToken(token));
-  if (!row) throw notFound("This invitation link is not valid. Check that you copied the whole link, or ask for a new invitation.");
+  const row = orNotFound(
+    await findInvitationByTokenHash(hashInviteToken(token)),
+    "This invitation link is not valid. Check that you copied the whole link, or ask for a new invitation.",
+  );
   if (row.usedAt) throw gone("This invitation has already been used. Sign in instead, or ask for a new invitation.");
   if (row.revokedAt) throw gone("This invitation was withdrawn by an admin. Ask for a new invitation.");
   if (row.supersededAt) throw superseded();

@@ -1,7 +1,7 @@
 import { db } from "@/db/client";
 import { countTagsOnSheets, deletePlanSetRow, findPlanSetFile, insertPlanSet, listPlanSets, listSheetIdsOfPlanSet, lockSheetsOfPlanSet, type InspectedPage } from "@/db/queries/plan-sets";
 import type { ProjectScope } from "@/db/queries/project-scope";
-import { AppError, notFound, orNotFound } from "@/lib/errors";
+import { AppError, orNotFound } from "@/lib/errors";
 import type { PlanSetView } from "@/lib/plans/api-types";
 import { sheetsImpact } from "@/lib/plans/removal-impact";
 import { deleteStoredFiles, fetchStoredFile } from "@/lib/uploads/file-store";
@@ -56,9 +56,7 @@ export async function removePlanSet(s: ProjectScope, id: string, confirmedTags?:
     // was asked is never deleted unseen.
     const tagsNow = await countTagsOnSheets(tx, s, await lockSheetsOfPlanSet(tx, s, id));
     if (tagsNow !== impact.tags) requireConfirmed(set.name, { ...impact, tags: tagsNow }, confirmedTags);
-    const key = await deletePlanSetRow(tx, s, id);
-    if (key === null) throw notFound(MISSING);
-    return key;
+    return orNotFound(await deletePlanSetRow(tx, s, id), MISSING);
   });
   // The rows are gone already; a storage hiccup leaves an orphan file, never a sheet without a file.
   await deleteStoredFiles([fileKey]).catch((error) => console.error("could not delete stored file", fileKey, error));

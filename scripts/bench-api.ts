@@ -12,7 +12,7 @@ import { createTag } from "@/db/queries/tags";
 import { createUnitType } from "@/db/queries/unit-types";
 import { signUpUser } from "@/db/queries/users";
 import { inspectPdf } from "@/lib/pdf/inspect";
-import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
+import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/scripts/demo-plan";
 import { testPrices } from "@/lib/takeoffs/fixtures";
 
 const base = process.env.NEXTAUTH_URL!;

@@ -6,7 +6,7 @@ import { encode } from "next-auth/jwt";
 import { pool } from "@/db/client";
 import { createProject } from "@/db/queries/projects";
 import { signUpUser } from "@/db/queries/users";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import { SHEET_RENDER_MARK } from "@/lib/plans/viewer/render-marks";
 
 const base = process.env.NEXTAUTH_URL!;

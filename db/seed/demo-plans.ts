@@ -8,7 +8,7 @@ import { createUnitType } from "../queries/unit-types";
 import { createOpeningType } from "../queries/opening-types";
 import { createTag } from "../queries/tags";
 import { inspectPdf } from "@/lib/pdf/inspect";
-import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
+import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/scripts/demo-plan";
 import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
 import type { TrimSpec } from "@/takeoff";
 

@@ -16,7 +16,7 @@ import { createUnitType } from "@/db/queries/unit-types";
 import { signUpUser } from "@/db/queries/users";
 import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import { runId, signIn } from "./helpers";
 
 const id = runId();

@@ -8,7 +8,7 @@ import { UTApi, UTFile } from "uploadthing/server";
 import { createPlanSet } from "@/db/queries/plan-sets";
 import { createProject } from "@/db/queries/projects";
 import { signUpUser } from "@/db/queries/users";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { SHEET_RENDER_MARK } from "@/lib/plans/viewer/render-marks";
 import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";

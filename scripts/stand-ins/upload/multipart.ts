@@ -1,6 +1,5 @@
-import { Transform, type TransformCallback } from "node:stream";
-
-const MAX_PART_HEADERS = 16 * 1024;
+import busboy, { type Busboy } from "busboy";
+import { Transform, type Readable, type TransformCallback } from "node:stream";
 
 /** The boundary from a `multipart/form-data; boundary=…` content type, or null if the body is not multipart. */
 export function multipartBoundary(contentType: string | undefined): string | null {
@@ -10,99 +9,73 @@ export function multipartBoundary(contentType: string | undefined): string | nul
 }
 
 /**
- * Streams the bytes of the part named `file` out of a multipart body, and nothing else. It works chunk by
- * chunk rather than buffering the body, for two reasons: uploads may be hundreds of megabytes, and when a
- * client drops the connection half way, every byte already seen must be on disk so the upload can resume.
- * Only the tail that could still turn out to be the closing delimiter is held back.
+ * Streams the bytes of the part named `file` out of a multipart body, and nothing else; busboy does the
+ * parsing. It works chunk by chunk rather than buffering the body, for two reasons: uploads may be hundreds of
+ * megabytes, and when a client drops the connection half way, every byte already seen must be on disk so the
+ * upload can resume. Only the tail that could still turn out to be the closing delimiter is held back.
+ * Throws a MultipartError (415) when busboy cannot read the content type.
  */
 export class FilePartExtractor extends Transform {
   /** True once the whole `file` part has been seen, closing delimiter included. */
   complete = false;
-  private readonly dashBoundary: Buffer;
-  private readonly delimiter: Buffer;
-  private state: "preamble" | "headers" | "file" | "skip" | "done" = "preamble";
-  private pending: Buffer = Buffer.alloc(0);
+  private readonly parser: Busboy;
+  private file: Readable | null = null;
+  private failure: MultipartError | null = null;
   private seen = 0;
 
   /** `maxBytes` bounds the whole body, so junk parts beside the file cannot stream in forever. */
   constructor(
-    boundary: string,
+    contentType: string,
     private readonly maxBytes = Number.POSITIVE_INFINITY,
   ) {
     super();
-    this.dashBoundary = Buffer.from(`--${boundary}`, "latin1");
-    this.delimiter = Buffer.from(`\r\n--${boundary}`, "latin1");
+    try {
+      this.parser = busboy({ headers: { "content-type": contentType } });
+    } catch (error) {
+      throw new MultipartError((error as Error).message, 415);
+    }
+    this.parser.on("file", (name, stream) => {
+      stream.on("error", () => {}); // a cut-off part is reported through `complete`, not as an error
+      if (name !== "file" || this.file) return void stream.resume();
+      this.file = stream;
+      stream.on("data", (chunk: Buffer) => this.push(chunk));
+      stream.on("end", () => (this.complete = true));
+    });
+    // busboy takes a part without a filename for a form field; every FormData Blob has one, so refuse it.
+    this.parser.on("field", (name) => {
+      if (name === "file") this.fail(new MultipartError("The `file` part carries no filename, so it is not a file"));
+    });
+    this.parser.on("error", (error: Error) => this.fail(new MultipartError(error.message)));
   }
 
   override _transform(chunk: Buffer, _encoding: BufferEncoding, callback: TransformCallback) {
-    try {
-      this.seen += chunk.length;
-      if (this.seen > this.maxBytes) throw new MultipartError("The body is larger than the file it carries", 413);
-      this.pending = this.pending.length ? Buffer.concat([this.pending, chunk]) : chunk;
-      this.advance();
-      callback();
-    } catch (error) {
-      callback(error as Error);
-    }
+    this.seen += chunk.length;
+    if (this.seen > this.maxBytes) return callback(new MultipartError("The body is larger than the file it carries", 413));
+    if (this.failure || this.complete) return callback(this.failure); // after the file part nothing matters
+    this.parser.write(chunk, () => callback(this.failure));
   }
 
   // Ending early is not an error here: after a dropped connection the caller still wants what was extracted,
-  // and checks `complete` itself.
+  // and checks `complete` itself. busboy is never told the body ended (it would only object that the form is
+  // cut off); what it already handed the file stream is let through first.
   override _flush(callback: TransformCallback) {
-    callback();
+    const done = () => {
+      this.parser.removeAllListeners("file");
+      this.parser.destroy();
+      callback(this.failure);
+    };
+    const file = this.file;
+    if (!file || file.readableEnded || this.failure) return done();
+    file.once("end", done);
+    setImmediate(() => {
+      if (file.readableEnded) return;
+      file.off("end", done);
+      done();
+    });
   }
 
-  private advance() {
-    for (;;) {
-      if (this.state === "done") {
-        this.pending = Buffer.alloc(0);
-        return;
-      }
-      if (this.state === "preamble") {
-        const at = this.pending.indexOf(this.dashBoundary);
-        if (at < 0) {
-          this.pending = this.pending.subarray(Math.max(0, this.pending.length - this.dashBoundary.length));
-          return;
-        }
-        this.pending = this.pending.subarray(at + this.dashBoundary.length);
-        this.state = "headers";
-        continue;
-      }
-      if (this.state === "headers") {
-        if (this.pending.length < 2) return;
-        if (this.pending.subarray(0, 2).toString("latin1") === "--") {
-          this.state = "done"; // the closing delimiter: no (more) parts
-          continue;
-        }
-        const end = this.pending.indexOf("\r\n\r\n");
-        if (end < 0) {
-          if (this.pending.length > MAX_PART_HEADERS) throw new MultipartError("Part headers too large");
-          return;
-        }
-        const headers = this.pending.subarray(0, end).toString("latin1");
-        this.pending = this.pending.subarray(end + 4);
-        this.state = partName(headers) === "file" ? "file" : "skip";
-        continue;
-      }
-      // "file" or "skip": body bytes up to the next delimiter.
-      const at = this.pending.indexOf(this.delimiter);
-      if (at < 0) {
-        const safe = this.pending.length - (this.delimiter.length - 1);
-        if (safe > 0) {
-          if (this.state === "file") this.push(this.pending.subarray(0, safe));
-          this.pending = this.pending.subarray(safe);
-        }
-        return;
-      }
-      if (this.state === "file") {
-        if (at > 0) this.push(this.pending.subarray(0, at));
-        this.complete = true;
-        this.state = "done";
-        continue;
-      }
-      this.pending = this.pending.subarray(at + this.delimiter.length);
-      this.state = "headers";
-    }
+  private fail(error: MultipartError) {
+    if (!this.complete) this.failure ??= error;
   }
 }
 
@@ -113,9 +86,4 @@ export class MultipartError extends Error {
   ) {
     super(message);
   }
-}
-
-function partName(headers: string): string | null {
-  const disposition = headers.split("\r\n").find((line) => /^content-disposition:/i.test(line.trim()));
-  return disposition ? (/\bname="([^"]*)"/i.exec(disposition)?.[1] ?? null) : null;
 }

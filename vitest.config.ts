@@ -11,7 +11,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: "unit",
-          include: ["takeoff/**/*.test.ts", "lib/**/*.test.ts"],
+          include: ["takeoff/**/*.test.ts", "lib/**/*.test.ts", "scripts/**/*.test.ts"],
           environment: "node",
         },
       },

@@ -12,7 +12,7 @@ import { addTag as createTag } from "@/lib/server/plans/tags";
 import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
 import { inspectPdf } from "@/lib/pdf/inspect";
-import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
+import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/scripts/demo-plan";
 import { usd } from "@/lib/takeoffs/format";
 import { testPrices } from "@/takeoff/testing/job-fixtures";
 

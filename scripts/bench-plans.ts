@@ -6,7 +6,7 @@ import { encode } from "next-auth/jwt";
 import { pool } from "@/db/client";
 import { createProject } from "@/lib/server/projects/projects";
 import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import { SHEET_RENDER_MARK } from "@/lib/plans/viewer/render-marks";
 
 const base = process.env.NEXTAUTH_URL!;

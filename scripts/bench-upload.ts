@@ -11,7 +11,7 @@ import { createDeflate } from "node:zlib";
 import autocannon from "autocannon";
 import { PDFDocument, PDFName } from "pdf-lib";
 import { GET as health } from "@/app/api/health/route";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import { inspectPdf, isPdfRejected } from "@/lib/pdf/inspect";
 
 const MB = 1024 * 1024;

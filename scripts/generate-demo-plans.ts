@@ -5,7 +5,7 @@
  */
 import { writeFileSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { generatePlanSet, type Rotation } from "../lib/plans/demo-plan/index";
+import { generatePlanSet, type Rotation } from "./demo-plan/index";
 
 const { values, positionals } = parseArgs({
   allowPositionals: true,

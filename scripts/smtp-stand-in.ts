@@ -1,5 +1,5 @@
 // The local SMTP stand-in as a process: `npm run demo` and the browser tests start it beside the app.
-import { startSmtpStandIn } from "@/lib/mail/stand-in";
+import { startSmtpStandIn } from "@/scripts/stand-ins/mail/smtp-stand-in";
 
 const port = Number(process.env.SMTP_PORT ?? 2525);
 const dir = process.env.OUTBOX_DIR ?? ".data/outbox";

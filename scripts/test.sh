@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # npm test — installs what is missing, starts PostgreSQL, creates a fresh test database, then runs the
-# type check, unit, integration and browser suites. Every suite runs; the exit code is non-zero if any failed.
+# type check, lint, unit, integration and browser suites. Every suite runs; the exit code is non-zero if any failed.
 source "$(dirname "$0")/lib.sh"
 ensure_chromium
 ensure_node_modules
@@ -19,6 +19,7 @@ run() { # name, command…
 }
 
 run "type check" npx tsc --noEmit -p .
+run "lint" npx eslint . # errors fail the run; warnings are shown
 run "unit tests" npx vitest run --project unit --reporter=default --reporter=json --outputFile.json="$T/results/unit.json"
 run "integration tests" npx vitest run --project integration --reporter=default --reporter=json --outputFile.json="$T/results/integration.json"
 run "production build" bash -c 'npx next build >"$MITERWISE_DATA_DIR/build.log" 2>&1 || { tail -n 40 "$MITERWISE_DATA_DIR/build.log"; exit 1; }'

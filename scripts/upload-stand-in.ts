@@ -1,5 +1,5 @@
 // The local upload stand-in as a process: `npm run demo` and the browser tests start it beside the app.
-import { startUploadStandIn } from "@/lib/uploads/stand-in";
+import { startUploadStandIn } from "@/scripts/stand-ins/upload";
 import { localUploadToken } from "@/lib/uploads/token";
 
 const port = Number(process.env.UPLOAD_STAND_IN_PORT ?? 3900);

@@ -7,7 +7,7 @@ import { listSheets } from "../queries/sheets";
 import { insertUnitType as createUnitType } from "../queries/unit-types";
 import { insertTag } from "../queries/tags";
 import { inspectPdf } from "@/lib/pdf/inspect";
-import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
+import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/scripts/demo-plan";
 import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
 // The window list and calibration go through their use cases: setbacks and scales are derived there.
 import { addOpeningType } from "@/lib/server/plans/opening-types";

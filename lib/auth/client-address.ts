@@ -1,4 +1,4 @@
-import { safeEqual } from "@/lib/uploads/stand-in/signature";
+import { safeEqual } from "@/lib/safe-equal";
 
 /**
  * Route handlers never see the socket, and `next start` keeps whatever X-Forwarded-For the client sent. So

@@ -8,7 +8,7 @@ import { PDFDocument, PDFName, PDFNumber, rgb } from "pdf-lib";
 import { beforeAll, describe, expect, it } from "vitest";
 import { parseLength } from "@/takeoff";
 import { inchesPerUnitFromPoints, inchesPerUnitFromScale, measureInches, scaleMismatchPercent, type Point } from "./calibration";
-import { openPdf, strokesOf, type PdfPage } from "./demo-plan/testing/pdf-reading";
+import { openPdf, strokesOf, type PdfPage } from "@/scripts/demo-plan/testing/pdf-reading";
 
 const KNOWN = parseLength(`12'-7 1/2"`); // 151.5 in
 const RATIO = 48; // 1/4" = 1'-0"

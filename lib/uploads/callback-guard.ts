@@ -1,7 +1,7 @@
 import { NextRequest } from "next/server";
 import { attachPendingUploadKey, hasPendingUpload } from "@/db/queries/pending-uploads";
 import { useLocalUploadStandInUnlessConfigured } from "./config";
-import { verifyPayload } from "./stand-in/signature";
+import { verifyPayload } from "./payload-signature";
 import { parseUploadToken } from "./token";
 
 const refusal = (status: number, message: string) => Response.json({ error: message }, { status });

@@ -11,7 +11,7 @@ import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
 import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";
-import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/lib/plans/demo-plan";
+import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/scripts/demo-plan";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
 import { UTApi, UTFile } from "uploadthing/server";

@@ -16,7 +16,7 @@ import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
 import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import { runId, signIn } from "./helpers";
 
 const id = runId();

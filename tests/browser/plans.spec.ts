@@ -4,7 +4,7 @@
  * openings of two types, read the counts, then reload and find everything where it was.
  */
 import { expect, test, type Page } from "@playwright/test";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import { openProjectSection, openSheetFromPlans, runId } from "./helpers";
 
 const id = runId();

@@ -5,7 +5,7 @@
  * %-escape in the address is a 400 with a message, not a plain-text 500.
  */
 import { expect, test, type Page } from "@playwright/test";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import { runId } from "./helpers";
 
 const id = runId();

@@ -8,7 +8,7 @@ import { UTApi, UTFile } from "uploadthing/server";
 import { createProject } from "@/lib/server/projects/projects";
 import { addPlanSet as createPlanSet } from "@/lib/server/plans/plan-sets";
 import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { SHEET_RENDER_MARK } from "@/lib/plans/viewer/render-marks";
 import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";

@@ -1,6 +1,6 @@
 import { rm } from "node:fs/promises";
 import { migrateDatabase } from "@/db/migrate";
-import { startSmtpStandIn } from "@/lib/mail/stand-in";
+import { startSmtpStandIn } from "@/scripts/stand-ins/mail/smtp-stand-in";
 
 /**
  * Runs once before the integration suite: the test database (created fresh by `npm test`) gets the

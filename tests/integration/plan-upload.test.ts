@@ -17,9 +17,9 @@ import * as fileRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/plan-s
 import { db } from "@/db/client";
 import { pendingUploads, planSets, sheets } from "@/db/schema";
 import { ingestPlanUpload } from "@/lib/server/plans/ingest-upload";
-import { generatePlanSet } from "@/lib/plans/demo-plan";
+import { generatePlanSet } from "@/scripts/demo-plan";
 import type { PlanUploadResult } from "@/lib/plans/api-types";
-import { startUploadStandIn, type UploadStandIn } from "@/lib/uploads/stand-in";
+import { startUploadStandIn, type UploadStandIn } from "@/scripts/stand-ins/upload";
 import { localUploadToken, parseUploadToken } from "@/lib/uploads/token";
 import { FetchXhr, serveUploadApp } from "./helpers/upload-app";
 import { call, sessionCookie } from "./helpers/http";

@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { parseLength } from "@/takeoff";
 import { inspectPdf } from "@/lib/pdf/inspect";
-import { distance, inchesPerUnitFromScale } from "../calibration";
+import { distance, inchesPerUnitFromScale } from "@/lib/plans/calibration";
 import { generatePlanSet, type GeneratedSheet, type GeneratedWindow } from "./index";
 import { TICK_WEIGHT } from "./annotate";
 import { WEIGHTS } from "./draw-plan";

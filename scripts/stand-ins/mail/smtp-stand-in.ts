@@ -3,6 +3,7 @@ import { randomBytes } from "node:crypto";
 import path from "node:path";
 import { SMTPServer } from "smtp-server";
 import { simpleParser } from "mailparser";
+import type { OutboxMessage } from "@/lib/mail/outbox";
 
 /**
  * The local SMTP stand-in: accepts any message on loopback and keeps it as two files in the outbox
@@ -24,7 +25,7 @@ export async function startSmtpStandIn(opts: { port: number; host?: string; dir:
           const parsed = await simpleParser(raw);
           const id = `${Date.now()}-${randomBytes(4).toString("hex")}`;
           const to = session.envelope.rcptTo.map((r) => r.address);
-          const summary = {
+          const summary: OutboxMessage = {
             id,
             from: session.envelope.mailFrom ? session.envelope.mailFrom.address : "",
             to,

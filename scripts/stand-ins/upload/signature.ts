@@ -1,26 +1,8 @@
-import { createHmac, timingSafeEqual } from "node:crypto";
+import { safeEqual } from "@/lib/safe-equal";
+import { signPayload, verifyPayload } from "@/lib/uploads/payload-signature";
 
-/**
- * HMAC-SHA256 signing exactly as the SDK does it (`@uploadthing/shared` crypto): hex digest keyed by the api key,
- * written as `hmac-sha256=<hex>`. The SDK signs upload URLs and file URLs; the stand-in signs callback bodies.
- */
-const PREFIX = "hmac-sha256=";
-
-export function signPayload(payload: string, apiKey: string): string {
-  return PREFIX + createHmac("sha256", apiKey).update(payload, "utf8").digest("hex");
-}
-
-export function verifyPayload(payload: string, signature: string | null | undefined, apiKey: string): boolean {
-  if (!signature?.startsWith(PREFIX)) return false;
-  return safeEqual(signature, signPayload(payload, apiKey));
-}
-
-/** Constant-time comparison, so neither signatures nor api keys can be guessed byte by byte from timings. */
-export function safeEqual(a: string, b: string): boolean {
-  const x = Buffer.from(a, "utf8");
-  const y = Buffer.from(b, "utf8");
-  return x.length === y.length && timingSafeEqual(x, y);
-}
+// The payload HMAC is the product's (it checks callbacks with it); the stand-in signs URLs and callbacks with it.
+export { safeEqual, signPayload, verifyPayload };
 
 /** What a verified upload URL promises about the file; every field came through the app's signature. */
 export type SignedUpload = {

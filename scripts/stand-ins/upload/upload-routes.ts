@@ -34,12 +34,17 @@ export function handleUpload(ctx: StandIn, req: IncomingMessage, res: ServerResp
 
   const start = rangeStart(req.headers.range);
   if (start === null || start > upload.size) return refuse(res, 416, "Expected Range: bytes=N- within the file");
-  const boundary = multipartBoundary(req.headers["content-type"]);
-  if (!boundary) return refuse(res, 415, "Expected a multipart/form-data body with a `file` part");
+  const contentType = req.headers["content-type"];
+  if (!contentType || !multipartBoundary(contentType)) return refuse(res, 415, "Expected a multipart/form-data body with a `file` part");
   const maxBody = upload.size - start + MULTIPART_OVERHEAD;
   if (Number(req.headers["content-length"] ?? 0) > maxBody) return refuse(res, 413, "Body larger than the file");
 
-  const extractor = new FilePartExtractor(boundary, maxBody);
+  let extractor: FilePartExtractor;
+  try {
+    extractor = new FilePartExtractor(contentType, maxBody);
+  } catch (error) {
+    return refuse(res, 415, (error as Error).message);
+  }
   extractor.on("error", () => {}); // reported through the pipeline below
   req.on("error", () => {});
   req.on("close", () => {

@@ -7,11 +7,11 @@ import { memberships, organisations, projects, users } from "@/db/schema";
 import { getUserByEmail } from "@/db/queries/users";
 import { uniqueOrgSlug } from "@/lib/server/accounts/org-slug";
 import { hashPassword } from "@/lib/auth/password";
-import { seedDemoPlans } from "@/db/seed/demo-plans";
-import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
-import { seedDemoTakeoffs } from "@/db/seed/demo-takeoffs";
-import { DEMO_PASSWORD, demoOrgs, demoPeople, roleOfLogin } from "@/db/seed/demo-data";
-import { markSeeded, seededRow } from "@/db/seed/seed-marks";
+import { seedDemoPlans } from "@/scripts/seed/demo-plans";
+import { seedDemoPriceBook } from "@/scripts/seed/demo-price-book";
+import { seedDemoTakeoffs } from "@/scripts/seed/demo-takeoffs";
+import { DEMO_PASSWORD, demoOrgs, demoPeople, roleOfLogin } from "@/scripts/seed/demo-data";
+import { markSeeded, seededRow } from "@/scripts/seed/seed-marks";
 
 if (process.argv.includes("--list")) {
   for (const p of demoPeople) console.log(`    ${p.email.padEnd(28)} ${roleOfLogin[p.key]}`);

@@ -10,7 +10,7 @@ import { memberships, users } from "@/db/schema";
 import { addOpeningType as createOpeningType } from "@/lib/server/plans/opening-types";
 import { createProject } from "@/lib/server/projects/projects";
 import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
-import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
+import { seedDemoPriceBook } from "@/scripts/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";
 import { openNav, openProject, openProjectSection, runId, signIn } from "./helpers";
 

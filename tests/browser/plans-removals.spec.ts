@@ -14,7 +14,7 @@ import { sheetsOf as listSheets, editSheet as updateSheet } from "@/lib/server/p
 import { addTag as createTag } from "@/lib/server/plans/tags";
 import { addUnitType as createUnitType } from "@/lib/server/plans/unit-types";
 import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
-import { seedDemoPriceBook } from "@/db/seed/demo-price-book";
+import { seedDemoPriceBook } from "@/scripts/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";
 import { generatePlanSet } from "@/scripts/demo-plan";
 import { runId, signIn } from "./helpers";

@@ -141,7 +141,7 @@ describe("the change log", () => {
 
 describe("the demo price book", () => {
   it("is found again by its seed key after being renamed, so seeding again adds no second book", async () => {
-    const { seedDemoPriceBook } = await import("@/db/seed/demo-price-book");
+    const { seedDemoPriceBook } = await import("@/scripts/seed/demo-price-book");
     const { pool } = await import("@/db/client");
     const w = await makeOrg("Sorrel");
     const books = async () => (await pool.query("select count(*)::int as n from price_books where org_id = $1", [w.org.id])).rows[0].n as number;
@@ -153,7 +153,7 @@ describe("the demo price book", () => {
   });
 
   it("is seeded once, every item valid, and survives its own export and import unchanged", async () => {
-    const { seedDemoPriceBook, DEMO_PRICE_BOOK_NAME } = await import("@/db/seed/demo-price-book");
+    const { seedDemoPriceBook, DEMO_PRICE_BOOK_NAME } = await import("@/scripts/seed/demo-price-book");
     const w = await makeOrg("Sorrel");
     expect(await seedDemoPriceBook(w.org.id, w.people.admin.id)).toMatchObject({ created: true });
     expect(await seedDemoPriceBook(w.org.id, w.people.admin.id)).toMatchObject({ created: false });

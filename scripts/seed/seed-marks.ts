@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
-import { db, type Tx } from "../client";
-import { seedMarks } from "../schema";
+import { db, type Tx } from "@/db/client";
+import { seedMarks } from "@/db/schema";
 
 /** The row seeded under `key`, or null when the demo has not seeded it yet. */
 export async function seededRow(key: string, tx: Tx = db): Promise<string | null> {

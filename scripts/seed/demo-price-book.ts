@@ -1,6 +1,6 @@
 import { and, eq } from "drizzle-orm";
-import { db } from "../client";
-import { priceBooks } from "../schema";
+import { db } from "@/db/client";
+import { priceBooks } from "@/db/schema";
 import { createPriceBook } from "@/lib/server/price-books/books";
 import { createPriceBookItem } from "@/lib/server/price-books/items";
 import { priceBookItemCreateSchema } from "@/lib/validators/price-books";

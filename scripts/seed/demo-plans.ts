@@ -1,11 +1,11 @@
 import { and, eq } from "drizzle-orm";
 import { UTApi, UTFile } from "uploadthing/server";
-import { db } from "../client";
-import { planSets, projects } from "../schema";
-import { insertPlanSet } from "../queries/plan-sets";
-import { listSheets } from "../queries/sheets";
-import { insertUnitType as createUnitType } from "../queries/unit-types";
-import { insertTag } from "../queries/tags";
+import { db } from "@/db/client";
+import { planSets, projects } from "@/db/schema";
+import { insertPlanSet } from "@/db/queries/plan-sets";
+import { listSheets } from "@/db/queries/sheets";
+import { insertUnitType as createUnitType } from "@/db/queries/unit-types";
+import { insertTag } from "@/db/queries/tags";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/scripts/demo-plan";
 import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";

@@ -1,6 +1,6 @@
 import { and, eq } from "drizzle-orm";
-import { db } from "../client";
-import { priceBookItems, priceBooks, projects, takeoffs } from "../schema";
+import { db } from "@/db/client";
+import { priceBookItems, priceBooks, projects, takeoffs } from "@/db/schema";
 import { runTakeoff } from "@/lib/server/takeoffs/run-takeoff";
 
 /**

@@ -1,4 +1,4 @@
-import type { ProjectStatus, Role } from "../schema";
+import type { ProjectStatus, Role } from "@/db/schema";
 
 /**
  * The demo's invented scenario: two trim contractors in the fictional river town of Alder Bend.

@@ -2,7 +2,7 @@
 const nextConfig = {
   // pg and the SMTP/mail packages use Node built-ins; keep them out of the bundle. tinypool starts its
   // workers from its own files, so it must stay where npm put it.
-  serverExternalPackages: ["pg", "nodemailer", "smtp-server", "mailparser", "highs", "pdfjs-dist", "tinypool"],
+  serverExternalPackages: ["pg", "nodemailer", "highs", "pdfjs-dist", "tinypool"],
   // The PDF inspection worker is loaded from disk at run time (lib/pdf/inspect-pool.ts), which file tracing
   // cannot see; keep it, and the pdf.js build it imports, in any traced deployment (output: "standalone").
   outputFileTracingIncludes: {

@@ -2,7 +2,7 @@
  * Every table, one import away. Tables live in db/tables/ by area; relations and inferred types are here.
  */
 import { relations } from "drizzle-orm";
-import { invitations, memberships, organisations, roleEnum, signInThrottle, users } from "./tables/accounts";
+import { invitations, memberships, organisations, roleEnum, users } from "./tables/accounts";
 import { projects, projectStatusEnum } from "./tables/projects";
 import { openingTypes, planSets, sheets, tags, unitTypes } from "./tables/plans";
 

@@ -122,8 +122,14 @@ export function toNumber(f: Fraction): number {
   let rest = f.d;
   let twos = 0;
   let fives = 0;
-  while (rest % 2n === 0n) (rest /= 2n), twos++;
-  while (rest % 5n === 0n) (rest /= 5n), fives++;
+  while (rest % 2n === 0n) {
+    rest /= 2n;
+    twos++;
+  }
+  while (rest % 5n === 0n) {
+    rest /= 5n;
+    fives++;
+  }
   const k = rest === 1n ? Math.max(twos, fives) : Math.max(0, GUARD_DIGITS + f.d.toString().length - f.n.toString().length);
   const scaled = f.n * 10n ** BigInt(k);
   const digits = `${scaled / f.d}${scaled % f.d === 0n ? "" : "1"}`;

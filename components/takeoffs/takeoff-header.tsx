@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { count, inchesText, usd } from "@/lib/takeoffs/format";
+import { count, usd } from "@/lib/takeoffs/format";
 import type { TakeoffDetail } from "@/lib/takeoffs/view";
 import { formatLengthExact } from "@/takeoff";
 import { LocalTime } from "./local-time";

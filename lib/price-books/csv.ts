@@ -123,7 +123,9 @@ function readHeader(cells: string[]): { columns: Column[]; errors: string[]; not
       } else {
         try {
           inches = parseLength(price[1]!);
-        } catch {}
+        } catch {
+          // Not a length: `inches` stays NaN and the check below names the column.
+        }
       }
       if (!(inches >= 12 && inches <= 12 * 100)) errors.push(`Column "${cell}": write the stock length in feet, like price 8'.`);
       else if (columns.some((c) => c.kind === "price" && sameLength(c.inches, inches))) errors.push(`Two columns price the ${stockLengthText(inches)} length.`);

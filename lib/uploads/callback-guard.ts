@@ -1,6 +1,6 @@
 import { NextRequest } from "next/server";
 import { attachPendingUploadKey, hasPendingUpload } from "@/db/queries/pending-uploads";
-import { useLocalUploadStandInUnlessConfigured } from "./config";
+import { pointAtUploadStandInUnlessConfigured } from "./config";
 import { verifyPayload } from "./payload-signature";
 import { parseUploadToken } from "./token";
 
@@ -14,7 +14,7 @@ const refusal = (status: number, message: string) => Response.json({ error: mess
 export async function refuseUnexpectedCallback(req: NextRequest): Promise<{ refusal: Response | null; request: NextRequest }> {
   const body = await req.text();
   const request = new NextRequest(req.url, { method: "POST", headers: req.headers, body });
-  useLocalUploadStandInUnlessConfigured();
+  pointAtUploadStandInUnlessConfigured();
   const { apiKey } = parseUploadToken(process.env.UPLOADTHING_TOKEN ?? "");
   if (!verifyPayload(body, req.headers.get("x-uploadthing-signature"), apiKey)) {
     return { refusal: refusal(403, "Invalid signature"), request };

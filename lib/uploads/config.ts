@@ -5,7 +5,7 @@ import { localUploadToken } from "./token";
  * local upload stand-in on loopback (demo, tests); production sets the real service's variables and
  * this changes nothing. Called by every module that talks to the upload service, before it does.
  */
-export function useLocalUploadStandInUnlessConfigured() {
+export function pointAtUploadStandInUnlessConfigured() {
   const e = process.env;
   if (e.UPLOADTHING_TOKEN) return;
   const port = Number(e.UPLOAD_STAND_IN_PORT ?? 3900);

@@ -1,9 +1,9 @@
 import { UTApi } from "uploadthing/server";
-import { useLocalUploadStandInUnlessConfigured } from "./config";
+import { pointAtUploadStandInUnlessConfigured } from "./config";
 
 let api: UTApi | undefined;
 function utapi() {
-  useLocalUploadStandInUnlessConfigured();
+  pointAtUploadStandInUnlessConfigured();
   api ??= new UTApi();
   return api;
 }

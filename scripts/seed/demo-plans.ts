@@ -8,7 +8,7 @@ import { insertUnitType as createUnitType } from "@/db/queries/unit-types";
 import { insertTag } from "@/db/queries/tags";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/scripts/demo-plan";
-import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
+import { pointAtUploadStandInUnlessConfigured } from "@/lib/uploads/config";
 // The window list and calibration go through their use cases: setbacks and scales are derived there.
 import { addOpeningType } from "@/lib/server/plans/opening-types";
 import { editSheet } from "@/lib/server/plans/sheets";
@@ -38,7 +38,7 @@ export async function seedDemoPlans(orgId: string, projectId: string | null, use
   if (existing.length > 0) return false;
 
   const { bytes, sheets: drawn } = await generatePlanSet();
-  useLocalUploadStandInUnlessConfigured();
+  pointAtUploadStandInUnlessConfigured();
   const name = "Larkspur-Commons-Bldg-C-Architectural.pdf";
   const [uploaded] = await new UTApi().uploadFiles([new UTFile([Buffer.from(bytes)], name, { type: "application/pdf" })]);
   if (!uploaded?.data) throw new Error(`could not store the demo plan set: ${uploaded?.error?.message ?? "no answer"}`);

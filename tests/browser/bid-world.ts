@@ -13,7 +13,7 @@ import { seedDemoPriceBook } from "@/scripts/seed/demo-price-book";
 import { hashPassword } from "@/lib/auth/password";
 import { DEMO_WINDOW_TYPES, generatePlanSet, type WindowMark } from "@/scripts/demo-plan";
 import { inspectPdf } from "@/lib/pdf/inspect";
-import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
+import { pointAtUploadStandInUnlessConfigured } from "@/lib/uploads/config";
 import { UTApi, UTFile } from "uploadthing/server";
 
 /**
@@ -37,7 +37,7 @@ export async function seedBidWorld(id: string, more?: (w: { orgId: string; proje
 
   const { bytes, sheets: drawn } = await generatePlanSet({ unitTypes: ["A", "B"] });
   // Stored through the upload service like a real upload, so the sheets open in the viewer.
-  useLocalUploadStandInUnlessConfigured();
+  pointAtUploadStandInUnlessConfigured();
   const [stored] = await new UTApi().uploadFiles([new UTFile([Buffer.from(bytes)], "set.pdf", { type: "application/pdf" })]);
   if (!stored?.data) throw new Error(`could not store the plan set: ${stored?.error?.message ?? "no answer"}`);
   await createPlanSet(scope, { key: stored.data.key, name: "set.pdf", size: bytes.byteLength }, (await inspectPdf(bytes)).pages);

@@ -11,7 +11,7 @@ import { signUp as signUpUser } from "@/lib/server/accounts/sign-up";
 import { generatePlanSet } from "@/scripts/demo-plan";
 import { inspectPdf } from "@/lib/pdf/inspect";
 import { SHEET_RENDER_MARK } from "@/lib/plans/viewer/render-marks";
-import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
+import { pointAtUploadStandInUnlessConfigured } from "@/lib/uploads/config";
 import { openProject, openSheetFromPlans, runId, signIn } from "./helpers";
 
 const id = runId();
@@ -24,7 +24,7 @@ test("zooming keeps the last drawing on screen until the new one is ready", asyn
   const project = await createProject({ orgId: organisation.id, userId: user.id, input: { name: projectName } });
   // Enough vector paths that one render takes many frames (the benchmark uses 20,000).
   const { bytes } = await generatePlanSet({ unitTypes: ["A"], commonArea: false, dense: 12_000 });
-  useLocalUploadStandInUnlessConfigured();
+  pointAtUploadStandInUnlessConfigured();
   const [stored] = await new UTApi().uploadFiles([new UTFile([Buffer.from(bytes)], "dense.pdf", { type: "application/pdf" })]);
   if (!stored?.data) throw new Error("could not store the plan set");
   await createPlanSet({ orgId: organisation.id, projectId: project.id, userId: user.id }, { key: stored.data.key, name: "dense.pdf", size: bytes.byteLength }, (await inspectPdf(bytes)).pages);

@@ -7,9 +7,9 @@ import { can } from "@/lib/permissions";
 import { getOrgContext } from "@/lib/server/accounts/org-context";
 import { ingestPlanUpload } from "@/lib/server/plans/ingest-upload";
 import { preparePlanUploads } from "@/lib/server/plans/plan-uploads";
-import { useLocalUploadStandInUnlessConfigured } from "@/lib/uploads/config";
+import { pointAtUploadStandInUnlessConfigured } from "@/lib/uploads/config";
 
-useLocalUploadStandInUnlessConfigured();
+pointAtUploadStandInUnlessConfigured();
 const f = createUploadthing();
 
 /** Same wording for "no such org" and "not yours": the upload route must not reveal what exists. */

@@ -41,6 +41,7 @@ export function SheetThumbnail({ sheet }: { sheet: SheetView }) {
     >
       {picture ? (
         // A blob: picture made in the browser: nothing for next/image to optimise.
+        // eslint-disable-next-line @next/next/no-img-element
         <img src={picture} alt="" width={width} height={height} className="block" />
       ) : slot && pdf ? (
         <PdfPage

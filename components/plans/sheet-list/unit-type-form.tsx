@@ -28,7 +28,10 @@ export function UnitTypeForm({
   const form = useFormMutation({
     mutationFn: onSubmit,
     onSuccess: () => {
-      if (!onCancel) (setName(""), setCount(""));
+      if (!onCancel) {
+        setName("");
+        setCount("");
+      }
     },
   });
   const { errors } = form;

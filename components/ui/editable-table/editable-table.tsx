@@ -44,6 +44,7 @@ export function EditableTable<Row extends { id: string }>({
 }: {
   rows: Row[];
   // `any`: each column keeps its own value type, as TanStack's column helper returns them.
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- see above
   columns: ColumnDef<typeof features, Row, any>[];
   controls: EditableControls<Row>;
   spec: EditableTableSpec<Row>;

@@ -122,7 +122,10 @@ export function planCreate(d: OpeningDraft): CreatePlan {
     const wall = readWall(d.wall);
     if (wall.ok) setback = { wallBuildUp: wall.wall };
     // A stand-in so the schema checks the rest without also blaming the (unused) typed setback.
-    else (Object.assign(fields, wall.fields), (setback = { setback: "0" }));
+    else {
+      Object.assign(fields, wall.fields);
+      setback = { setback: "0" };
+    }
   }
 
   const parsed = openingTypeCreateSchema.safeParse({

@@ -1,8 +1,7 @@
 "use client";
 
-import type { SheetView, UnitTypeView } from "@/lib/plans/api-types";
-import { PlanSetGroup } from "./plan-set-group";
-import type { SheetNotice, SheetPatch } from "./use-plans-data";
+import type { SheetView } from "@/lib/plans/api-types";
+import { PlanSetGroup, type PlanSetGroupProps } from "./plan-set-group";
 
 /** Sheets come ordered by plan set (oldest first), then page: group them in that order. */
 function byPlanSet(sheets: SheetView[]) {
@@ -15,19 +14,8 @@ function byPlanSet(sheets: SheetView[]) {
   return [...groups.entries()];
 }
 
-export function SheetList(props: {
-  orgSlug: string;
-  projectId: string;
-  sheets: SheetView[];
-  unitTypes: UnitTypeView[];
-  canWrite: boolean;
-  notices: Record<string, SheetNotice>;
-  onDismiss: (sheetId: string) => void;
-  onSave: (sheet: SheetView, patch: SheetPatch) => Promise<Record<string, string> | null>;
-  warningsFor: (sheetId: string) => string[];
-  onRemoveSheet: (sheet: SheetView) => void;
-  onRemoveSet: (planSetId: string, name: string, sheets: SheetView[]) => void;
-}) {
+/** The plans page's sheets, one group per uploaded PDF; the group takes the same props for its own sheets. */
+export function SheetList(props: Omit<PlanSetGroupProps, "planSetId" | "name">) {
   const { sheets, ...rest } = props;
   if (sheets.length === 0) {
     return (

@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions } from "@tanstack/react-query";
 import { z } from "zod";
-import type { PriceGapsView } from "@/lib/server/takeoffs/price-gaps";
+import type { PriceGapsView } from "@/lib/plans/api-types";
 import { request } from "./fetch";
 import { projectKey, projectPath, type ProjectScope } from "./project-scope";
 

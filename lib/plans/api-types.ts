@@ -110,3 +110,11 @@ export interface StaleEdit<T> {
 
 /** What the upload route hands back to the browser once the server has checked the PDF. */
 export type PlanUploadResult = { ok: true; planSetId: string; pageCount: number } | { ok: false; error: string };
+
+/** The window list checked against a price book (GET …/price-gaps). */
+export interface PriceGapsView {
+  /** The book checked: the one asked for, else the one this project's last takeoff used, else the organisation's first. */
+  priceBook: { id: string; name: string } | null;
+  /** Per opening type: what the book cannot supply (with the fix), or why the window cannot be cut at all. */
+  gaps: { openingTypeId: string; mark: string; material: string; kind: "no-item" | "too-long" | "cannot-cut"; message: string; fix: string }[];
+}

@@ -1,4 +1,4 @@
-import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
+import type { TakeoffView } from "@/db/queries/takeoffs";
 
 /** A saved takeoff as it crosses to the browser: dates as ISO text, the same shape the API's JSON has. */
 export type TakeoffDetail = Omit<TakeoffView, "createdAt" | "submittedAt"> & { createdAt: string; submittedAt: string | null };

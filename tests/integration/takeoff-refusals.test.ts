@@ -10,7 +10,7 @@ import * as priceGapsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/p
 import { db } from "@/db/client";
 import { openingTypes, takeoffs } from "@/db/schema";
 import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
-import type { PriceGapsView } from "@/lib/server/takeoffs/price-gaps";
+import type { PriceGapsView } from "@/lib/plans/api-types";
 import { addOpeningType as createOpeningType } from "@/lib/server/plans/opening-types";
 import { addTag as createTag } from "@/lib/server/plans/tags";
 import { call, sessionCookie } from "./helpers/http";

@@ -5,13 +5,9 @@ import { requireProject } from "@/lib/server/projects/require-project";
 import { getSettings } from "@/lib/server/settings/settings";
 import { assessOpeningType } from "@/takeoff";
 import { snapshotPrices } from "./snapshot";
+import type { PriceGapsView } from "@/lib/plans/api-types";
 
-export interface PriceGapsView {
-  /** The book checked: the one asked for, else the one this project's last takeoff used, else the organisation's first. */
-  priceBook: { id: string; name: string } | null;
-  /** Per opening type: what the book cannot supply (with the fix), or why the window cannot be cut at all. */
-  gaps: { openingTypeId: string; mark: string; material: string; kind: "no-item" | "too-long" | "cannot-cut"; message: string; fix: string }[];
-}
+export type { PriceGapsView };
 
 /**
  * The window list against a price book, as the takeoff will see it — shown on the openings list so a

@@ -9,7 +9,7 @@ import type { Demand, StockItem } from "../types";
 function pack(demand: Demand[], stock: StockItem[], kerf: number, rule: FitRule) {
   const inst = buildInstance(demand, stock, { kerf });
   const d = inst.items.map((it) => it.demand);
-  const plan = finishPlan(inst, fitDecreasing(inst, d, rule), d);
+  const plan = finishPlan(inst, fitDecreasing(inst, d, rule) ?? [], d);
   const boards: { stock: number; cuts: number[] }[] = [];
   for (const c of plan) {
     const cuts = inst.items.flatMap((it, i) => Array<number>(c.a[i] ?? 0).fill(it.lengthNum));

@@ -64,8 +64,10 @@ async function solve(inst: Instance): Promise<StockPlan> {
   let best = finishPlan(inst, roundAndRepair(inst, pool, keys, lp.x, demand, objective.cost), demand);
   // The LP-rounded plan can lose to the simple rules when column generation stops early; never return worse.
   for (const rule of ["first", "best"] as const) {
-    const plan = finishPlan(inst, fitDecreasing(inst, demand, rule), demand);
-    if (better(inst, plan, best)) best = plan;
+    if (!planCost(inst, best).gt(costBound)) break;
+    const packed = fitDecreasing(inst, demand, rule);
+    const plan = packed && finishPlan(inst, packed, demand);
+    if (plan && better(inst, plan, best)) best = plan;
   }
 
   const exactGrid = inst.items.every((it) => it.w === it.wLb) && inst.stocks.every((s) => s.cap === s.capLb);

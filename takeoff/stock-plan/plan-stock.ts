@@ -1,12 +1,14 @@
-import { ceilToMultiple, gcdFractions } from "../exact";
+import { ceilToMultiple, gcdFractions, type Fraction } from "../exact";
 import type { Demand, PlanOptions, StockItem, StockPlan } from "../types";
 import { better, boardPatterns, finishPlan, planCost, planLength } from "./assemble";
 import { columnGeneration, type Objective } from "./column-generation";
 import { addUnique, homogeneousColumns, type Column } from "./columns";
 import { loadHighs } from "./highs-solver";
+import { fitDecreasing } from "./first-fit";
 import { buildInstance, type Instance } from "./instance";
 import { integerCosts, maximalPatterns, patternMip } from "./master-mip";
 import { roundAndRepair } from "./round-repair";
+import { trivialBounds } from "./trivial-bound";
 
 /**
  * The whole-pattern MIP that proves an optimum is only tried on small
@@ -23,6 +25,10 @@ const EXACT_MIP_LIMITS = { nodes: 20_000, seconds: 2 };
 const LENGTH_LIMITS = { iterations: 80, tolerance: 1e-4 };
 
 const EMPTY: StockPlan = { boards: [], boardCount: 0, purchasedLength: 0, cost: 0, lowerBound: { length: 0, cost: 0 } };
+
+function maxFraction(a: Fraction, b: Fraction): Fraction {
+  return a.lt(b) ? b : a;
+}
 
 function objectives(inst: Instance): { cost: Objective; length: Objective } {
   return {
@@ -53,8 +59,16 @@ async function solve(inst: Instance): Promise<StockPlan> {
   addUnique(pool, keys, homogeneousColumns(inst, demand));
 
   const lp = columnGeneration(inst, pool, keys, demand, objective.cost);
-  let costBound = ceilToMultiple(lp.bound, objective.cost.step);
+  const trivial = trivialBounds(inst, demand, objective.cost.step, objective.length.step);
+  let costBound = maxFraction(ceilToMultiple(lp.bound, objective.cost.step), trivial.cost);
   let best = finishPlan(inst, roundAndRepair(inst, pool, keys, lp.x, demand, objective.cost), demand);
+  // The LP-rounded plan can lose to the simple rules when column generation stops early; never return worse.
+  for (const rule of ["first", "best"] as const) {
+    if (!planCost(inst, best).gt(costBound)) break;
+    const packed = fitDecreasing(inst, demand, rule);
+    const plan = packed && finishPlan(inst, packed, demand);
+    if (plan && better(inst, plan, best)) best = plan;
+  }
 
   const exactGrid = inst.items.every((it) => it.w === it.wLb) && inst.stocks.every((s) => s.cap === s.capLb);
   const pieces = demand.reduce((t, d) => t + d, 0);
@@ -75,7 +89,7 @@ async function solve(inst: Instance): Promise<StockPlan> {
   }
 
   const lengthLp = columnGeneration(inst, pool, keys, demand, objective.length, LENGTH_LIMITS);
-  const lengthBound = ceilToMultiple(lengthLp.bound, objective.length.step);
+  const lengthBound = maxFraction(ceilToMultiple(lengthLp.bound, objective.length.step), trivial.length);
   return {
     boards: boardPatterns(inst, best),
     boardCount: best.reduce((t, c) => t + c.count, 0),

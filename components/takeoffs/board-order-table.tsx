@@ -6,7 +6,11 @@ import { materialCost, type BoardOrder } from "@/takeoff";
 const TH = "px-2 py-1.5 font-semibold";
 const TD = "num whitespace-nowrap px-2 py-1";
 
-const planned = (o: BoardOrder, length: number) => o.plan.boards.filter((b) => b.stockLength === length).reduce((t, b) => t + b.count, 0);
+/** Boards the plan uses at a length; a ripped order's plan counts strips, its boards are in rip. */
+const planned = (o: BoardOrder, length: number) =>
+  o.rip
+    ? (o.rip.boards.find((b) => b.stockLength === length)?.boards ?? 0)
+    : o.plan.boards.filter((b) => b.stockLength === length).reduce((t, b) => t + b.count, 0);
 
 /** What to buy: per price-book item (and rip width), boards per stock length with the allowance, at the snapshot's prices. */
 export function BoardOrderTable({ orders }: { orders: BoardOrder[] }) {
@@ -37,7 +41,8 @@ export function BoardOrderTable({ orders }: { orders: BoardOrder[] }) {
                       {o.itemName}
                       <span className="block text-xs font-normal text-graphite-600">
                         {MATERIAL_LABELS[o.material]}
-                        {o.width !== undefined && ` ripped to ${inchesText(o.width)}${o.stockWidth ? ` from ${inchesText(o.stockWidth)} board` : ""}`} ·{" "}
+                        {o.width !== undefined && ` ripped to ${inchesText(o.width)}${o.stockWidth ? ` from ${inchesText(o.stockWidth)} board` : ""}`}
+                        {o.rip && `, ${o.rip.stripsPerBoard} strips per board`} ·{" "}
                         {count(o.pieces)} pieces, {feet(o.linearInches / 12)} ft
                       </span>
                     </th>

@@ -18,3 +18,19 @@ it("writes item names and supplier codes a spreadsheet would run as formulas beh
   // No cell of the file starts a formula.
   for (const cell of rows.flat()) expect(cell, cell).not.toMatch(/^[=+\-@\t\r]/);
 });
+
+it("gives a ripped order's planned boards, not its strips", async () => {
+  const result = await computeTakeoff(testInputs(), testPrices());
+  const parsed = parseCsv(orderCsv(result));
+  if (!parsed.ok) throw new Error(parsed.message);
+  const rows = parsed.records.slice(1).map((r) => r.fields);
+  const ripped = result.orders.filter((o) => o.rip);
+  expect(ripped.length).toBeGreaterThan(0);
+  for (const o of ripped) {
+    for (const b of o.rip!.boards) {
+      const row = rows.find((r) => r[0] === o.material && r[1] === o.itemName && r[4] && Number(r[5]) === b.boards);
+      expect(row, `${o.itemName} ${b.stockLength}`).toBeDefined();
+      expect(b.boards).toBe(Math.ceil(b.strips / o.rip!.stripsPerBoard));
+    }
+  }
+});

@@ -13,7 +13,10 @@ export function orderCsv(result: TakeoffResult): string {
   const rows: string[][] = [header];
   for (const o of result.orders) {
     for (const buy of o.toBuy) {
-      const planned = o.plan.boards.filter((b) => b.stockLength === buy.stockLength).reduce((t, b) => t + b.count, 0);
+      // A ripped order's plan counts strips; its boards per length are in rip.
+      const planned = o.rip
+        ? (o.rip.boards.find((b) => b.stockLength === buy.stockLength)?.boards ?? 0)
+        : o.plan.boards.filter((b) => b.stockLength === buy.stockLength).reduce((t, b) => t + b.count, 0);
       rows.push([
         o.material,
         o.itemName,

@@ -65,7 +65,25 @@ describe("board orders of a job", () => {
         }
       }
       const wanted: Demand[] = [...demand].map(([length, quantity]) => ({ length, quantity }));
-      checkPlan(o.plan, wanted, book.items.find((i) => i.id === o.itemId)!.stock, 0.125);
+      const stock = book.items.find((i) => i.id === o.itemId)!.stock;
+      if (!o.rip) {
+        checkPlan(o.plan, wanted, stock, 0.125);
+        continue;
+      }
+      // A ripped plan is checked along its strips (each a stock piece at the board's length and price),
+      // then its boards are ceil(strips / n) per length.
+      const strips = o.rip.boards;
+      const price = (length: number) => stock.find((s) => s.length === length)!.price;
+      const stripView = {
+        ...o.plan,
+        boardCount: o.rip.strips,
+        purchasedLength: strips.reduce((t, b) => t + b.strips * b.stockLength, 0),
+        cost: strips.reduce((t, b) => t + b.strips * price(b.stockLength), 0),
+        lowerBound: { length: o.plan.lowerBound.length, cost: 0 },
+      };
+      checkPlan(stripView, wanted, stock, 0.125);
+      for (const b of strips) expect(b.boards).toBe(Math.ceil(b.strips / o.rip.stripsPerBoard));
+      expect(o.plan.boardCount).toBe(strips.reduce((t, b) => t + b.boards, 0));
     }
     const totals = takeoffTotals(types.map((t) => ({ opening: t, spec: t.trimSpec, quantity: t.quantity })));
     for (const s of result.materials) {

@@ -2,7 +2,8 @@ import { ceilDiv, exact, numer } from "../exact";
 import { formatLength } from "../length-format";
 import { planStock } from "../stock-plan/plan-stock";
 import type { CutPiece, Material, StockPlan } from "../types";
-import type { BoardOrder, PriceItemSnapshot } from "./types";
+import { boardsFromStrips, stripsPerBoard } from "./rip";
+import type { BoardOrder, PriceItemSnapshot, RipPlan } from "./types";
 
 /** The job's pieces of one opening type, with the price-book item each material is cut from. */
 export interface PricedLine {
@@ -23,6 +24,9 @@ interface Group {
  * a board is ripped to one width and then crosscut (common practice), so extension pieces of one width
  * share boards and pieces of two widths do not. Each group is planned by planStock with the kerf on
  * every cut, then the waste allowance is added. `placeholders` names the stand-in items.
+ * A ripped group (extensions) is planned along strips: each
+ * board yields n strips (see stripsPerBoard), and boards bought per length are ceil(strips / n). The rip
+ * kerf is the takeoff's saw kerf (inputs.settings.kerf): the engine keeps no separate rip-blade setting.
  */
 export async function orderBoards(
   lines: readonly PricedLine[],
@@ -34,6 +38,8 @@ export async function orderBoards(
     for (const piece of line.pieces) {
       const item = line.items[piece.material];
       if (!item) throw new Error(`${piece.material}: no price-book item picked for this piece`);
+      // Only extensions are ripped to several strips: a stool narrower than its stock keeps one nosed
+      // edge per board, so its offcut strip is no stool (common practice).
       const width = piece.material === "extension" ? piece.width : undefined;
       const key = `${item.id}|${piece.material}|${width ?? ""}`;
       const group = groups.get(key) ?? { item, material: piece.material, width, demand: new Map<number, number>() };
@@ -46,14 +52,18 @@ export async function orderBoards(
   for (const g of groups.values()) {
     const demand = [...g.demand.entries()].sort((a, b) => b[0] - a[0]).map(([length, quantity]) => ({ length, quantity }));
     let plan: StockPlan;
+    let rip: RipPlan | undefined;
     try {
       plan = await planStock(demand, g.item.stock, { kerf: opts.kerf });
     } catch (e) {
       const width = g.width === undefined ? "" : ` ${formatLength(g.width)} wide`;
       throw new Error(`${g.material}${width} from “${g.item.name}”: ${(e as Error).message}`);
     }
+    const n = g.width === undefined ? 1 : stripsPerBoard(g.item.faceWidth, g.width, opts.kerf);
+    if (n > 1) ({ plan, rip } = boardsFromStrips(plan, n, g.item));
     const perLength = new Map<number, number>();
-    for (const b of plan.boards) perLength.set(b.stockLength, (perLength.get(b.stockLength) ?? 0) + b.count);
+    if (rip) for (const b of rip.boards) perLength.set(b.stockLength, b.boards);
+    else for (const b of plan.boards) perLength.set(b.stockLength, (perLength.get(b.stockLength) ?? 0) + b.count);
     orders.push({
       itemId: g.item.id,
       itemName: g.item.name,
@@ -63,6 +73,7 @@ export async function orderBoards(
       pieces: demand.reduce((t, d) => t + d.quantity, 0),
       linearInches: demand.reduce((t, d) => t + d.length * d.quantity, 0),
       plan,
+      ...(rip ? { rip } : {}),
       toBuy: withAllowance(perLength, opts.wastePercent, g.item),
       ...(opts.placeholders.has(g.item.id) ? { placeholder: true as const } : {}),
     });

@@ -49,7 +49,11 @@ describe("computeTakeoff", () => {
       expect(bought).toBe(planned + Math.ceil(planned * 0.1 - 1e-9));
       const longest = Math.max(...order.plan.boards.map((b) => b.stockLength));
       for (const buy of order.toBuy.filter((b) => b.stockLength !== longest)) {
-        expect(buy.count).toBe(order.plan.boards.filter((b) => b.stockLength === buy.stockLength).reduce((t, b) => t + b.count, 0));
+        // A ripped order's plan counts strips; its boards per length are rip.boards (ceil(strips / n)).
+        const planned = order.rip
+          ? order.rip.boards.find((b) => b.stockLength === buy.stockLength)!.boards
+          : order.plan.boards.filter((b) => b.stockLength === buy.stockLength).reduce((t, b) => t + b.count, 0);
+        expect(buy.count).toBe(planned);
       }
     }
     const bought = result.orders.flatMap((o) => o.toBuy).reduce((t, b) => t + b.count * b.price, 0);

@@ -37,7 +37,9 @@ export function summarizeMaterials(orders: readonly BoardOrder[]): MaterialSumma
     const used = mine.reduce((t, o) => t + o.linearInches, 0);
     const boardCount = mine.reduce((t, o) => t + o.plan.boardCount, 0);
     const perLength = new Map<number, number>();
-    for (const b of mine.flatMap((o) => o.plan.boards)) perLength.set(b.stockLength, (perLength.get(b.stockLength) ?? 0) + b.count);
+    // A ripped order's plan counts strips; its boards per length are in rip.
+    const boardsOf = (o: BoardOrder) => o.rip?.boards.map((b) => ({ stockLength: b.stockLength, count: b.boards })) ?? o.plan.boards;
+    for (const b of mine.flatMap(boardsOf)) perLength.set(b.stockLength, (perLength.get(b.stockLength) ?? 0) + b.count);
     return [
       {
         material,

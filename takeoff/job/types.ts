@@ -70,11 +70,30 @@ export interface BoardOrder {
   stockWidth?: number;
   pieces: number;
   linearInches: number;
+  /**
+   * The optimised plan. For a ripped order (rip present) its patterns are cut along strips, so a
+   * pattern's count is strips; boardCount and cost are boards bought, and purchasedLength is every
+   * strip bought, the unused ones included (they are offcut).
+   */
   plan: StockPlan;
+  /** Present when each board is ripped into several strips before crosscutting; absent in older takeoffs. */
+  rip?: RipPlan;
   /** Boards per stock length with the waste allowance added (what to buy). */
   toBuy: { stockLength: number; count: number; price: number }[];
   /** Priced with a placeholder: the price book has no such item (see TakeoffResult.placeholders). */
   placeholder?: true;
+}
+
+/** How a ripped order's boards are shared out as strips. */
+export interface RipPlan {
+  /** Strips of the order's width one board yields after the rip kerf. */
+  stripsPerBoard: number;
+  /** Strips the plan cuts pieces from. */
+  strips: number;
+  /** Strips bought but not used (boards × stripsPerBoard − strips); their length is offcut. */
+  offcutStrips: number;
+  /** Per stock length, longest first: strips used and boards bought for them (before the allowance). */
+  boards: { stockLength: number; strips: number; boards: number }[];
 }
 
 /** An item the price book lacked, priced with a stand-in so the estimator could carry on. */

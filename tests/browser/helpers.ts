@@ -13,6 +13,13 @@ export function recordDialogs(page: Page): string[] {
   return seen;
 }
 
+/** A page that threw while rendering shows the framework's or our error page; either way it is recorded here. */
+export function recordPageErrors(page: Page): string[] {
+  const errors: string[] = [];
+  page.on("pageerror", (e) => errors.push(e.message));
+  return errors;
+}
+
 export async function signOut(page: Page) {
   await page.getByRole("button", { name: "Sign out" }).click();
   await expect(page).toHaveURL(/\/sign-in(\?|$)/);

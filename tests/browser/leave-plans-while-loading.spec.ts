@@ -2,21 +2,15 @@
  * Leaving the Plans page the moment its thumbnails start loading: the plan set's PDF is then destroyed while
  * pdf.js is still loading it, which used to throw pdf.js's "Worker was terminated" as an uncaught error.
  */
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { seedBidWorld } from "./bid-world";
-import { openProject, runId, signIn } from "./helpers";
+import { openProject, recordPageErrors, runId, signIn } from "./helpers";
 
 const id = runId();
 let world: Awaited<ReturnType<typeof seedBidWorld>>;
 test.beforeAll(async () => {
   world = await seedBidWorld(`lv${id}`);
 });
-
-function recordPageErrors(page: Page) {
-  const errors: string[] = [];
-  page.on("pageerror", (e) => errors.push(e.message));
-  return errors;
-}
 
 test("leaving the Plans page while its thumbnails are still loading throws nothing in the page", async ({ page }) => {
   // Before the fix every quick exit from Plans threw pdf.js's "Worker was terminated" as an uncaught error:

@@ -5,20 +5,13 @@
  */
 import { expect, test, type Page } from "@playwright/test";
 import { seedBidWorld } from "./bid-world";
-import { openProject, openSheetFromPlans, runId, signIn, signOut } from "./helpers";
+import { openProject, recordPageErrors, openSheetFromPlans, runId, signIn, signOut } from "./helpers";
 
 const id = runId();
 let world: Awaited<ReturnType<typeof seedBidWorld>>;
 test.beforeAll(async () => {
   world = await seedBidWorld(`nav${id}`);
 });
-
-/** A page that threw while rendering shows the framework's or our error page; either way it is recorded here. */
-function recordPageErrors(page: Page) {
-  const errors: string[] = [];
-  page.on("pageerror", (e) => errors.push(e.message));
-  return errors;
-}
 
 async function expectViewerOf(page: Page, label: string) {
   await expect(page.getByRole("heading", { level: 1, name: label })).toBeVisible();

@@ -79,6 +79,12 @@ export interface StockItem {
 
 export interface PlanOptions {
   kerf: number;
+  /**
+   * Wall-clock time the search may take, in milliseconds. When it ends the planner returns the best
+   * plan found so far with the bound proven so far (`proof: "best-found"`). Absent: the planner's
+   * default (DEFAULT_PLAN_BUDGET_MS).
+   */
+  budgetMs?: number;
 }
 
 export interface BoardPattern {
@@ -98,4 +104,12 @@ export interface StockPlan {
   cost: number;
   /** Proven lower bounds: no plan can cost less, and no plan can buy less length. */
   lowerBound: { length: number; cost: number };
+  /**
+   * "optimal": the plan's cost meets the proven bound, so no plan costs less. "best-found": the search
+   * ended (its time budget, or the size limits of the exact step) with the plan above the bound; the plan
+   * is the best found and the bound is still proven. Absent in plans saved before it was recorded.
+   */
+  proof?: "optimal" | "best-found";
+  /** True when the time budget ended the search before it finished. */
+  budgetSpent?: boolean;
 }

@@ -12,6 +12,13 @@ export interface TakeoffSettings {
   kerf: number;
   /** Extra boards bought for defects and miscuts, percent of the optimised count per stock length. */
   wastePercent: number;
+  /** Kerf of the rip cut between strips ripped from one board; absent = `kerf` (takeoffs saved before it existed). */
+  ripKerf?: number;
+  /**
+   * Seconds the whole run may spend planning board orders, shared out over its orders; absent = the
+   * engine's default (DEFAULT_RUN_PLAN_SECONDS). When it ends, orders carry the best plan found so far.
+   */
+  planSeconds?: number;
 }
 
 export interface TakeoffInputs {

@@ -51,6 +51,8 @@ export type {
   OpeningTypeResult,
   PlaceholderLine,
   PriceItemSnapshot,
+  RipLayout,
+  RipPlan,
   TakeoffInputs,
   TakeoffPrices,
   TakeoffResult,

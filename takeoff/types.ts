@@ -95,6 +95,8 @@ export interface BoardPattern {
   cuts: number[];
   /** stockLength − Σ(cut + kerf). */
   offcut: number;
+  /** In a ripped order: the width of the strip these cuts are made along. */
+  width?: number;
 }
 
 export interface StockPlan {

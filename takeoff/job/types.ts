@@ -75,6 +75,11 @@ export interface BoardOrder {
   /** Rip width for extensions (the setback), and the board it is ripped from. */
   width?: number;
   stockWidth?: number;
+  /**
+   * Every strip width of an order whose boards are ripped to several widths, widest first (then `width`
+   * is absent). Absent in takeoffs saved before mixed widths shared boards.
+   */
+  widths?: number[];
   pieces: number;
   linearInches: number;
   /**
@@ -101,6 +106,21 @@ export interface RipPlan {
   offcutStrips: number;
   /** Per stock length, longest first: strips used and boards bought for them (before the allowance). */
   boards: { stockLength: number; strips: number; boards: number }[];
+  /**
+   * How the boards are ripped: each layout is `count` boards of `stockLength` ripped to the strip widths
+   * listed, widest first, leaving `offcutWidth` of board. The crosscuts along each strip are the plan's
+   * board patterns of that width (BoardPattern.width). Absent in takeoffs saved before mixed widths.
+   */
+  layouts?: RipLayout[];
+}
+
+export interface RipLayout {
+  stockLength: number;
+  count: number;
+  /** Widths of the strips ripped from one board, widest first. */
+  strips: number[];
+  /** Board width left after the strips and the rip kerfs between them. */
+  offcutWidth: number;
 }
 
 /** An item the price book lacked, priced with a stand-in so the estimator could carry on. */

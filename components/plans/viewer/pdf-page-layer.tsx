@@ -5,17 +5,14 @@
  * browser, after pdf-setup has pointed pdf.js at the worker we ship.
  */
 import { useState } from "react";
-import { Document, Page } from "react-pdf";
+import { Page } from "react-pdf";
 import type { PDFPageProxy } from "pdfjs-dist";
 import { planSetFileUrl } from "@/components/plans/pdf-setup";
+import { usePdfDocument } from "@/components/plans/use-pdf-document";
 import type { DetailRegion } from "@/lib/plans/viewer/render-plan";
 import type { Size, View } from "@/lib/plans/viewer/view-transform";
 import { markSheetRendered } from "@/lib/plans/viewer/render-marks";
 import { DetailTile } from "./detail-tile";
-
-// A stable object: react-pdf reloads the document whenever `options` changes identity.
-// No eval of font programs from an uploaded file; fetch only the byte ranges the page needs.
-const OPTIONS = { isEvalSupported: false, disableAutoFetch: true };
 
 // react-pdf sizes its page box and canvas with inline styles; we place and size them from our view instead,
 // so the bitmap is CSS-stretched to the live zoom. (A plain style rule: it must beat those inline styles.)
@@ -50,14 +47,18 @@ export default function PdfPageLayer(props: PdfPageLayerProps) {
   const layers = baseScale === null ? [] : shown === null || shown === baseScale ? [baseScale] : [shown, baseScale];
   const box = view ? { left: view.x, top: view.y, width: pageSize.width * view.zoom, height: pageSize.height * view.zoom } : { display: "none" };
 
-  // The document is mounted (and the PDF requested) at once; pages join when the viewer's size is known.
+  // The PDF is requested at once; pages join when the viewer's size is known. Loaded by usePdfDocument,
+  // not react-pdf's <Document>, so leaving the sheet while it still loads throws nothing.
+  const pdf = usePdfDocument(planSetFileUrl(file.orgSlug, file.projectId, file.planSetId), { disableAutoFetch: true, onError });
+  if (!pdf) return null;
   return (
-    <Document file={planSetFileUrl(file.orgSlug, file.projectId, file.planSetId)} options={OPTIONS} loading={null} error={null} onLoadError={onError} onSourceError={onError}>
+    <>
       <style>{FILL_CSS}</style>
       <div data-sheet-page className="absolute bg-white shadow-md ring-1 ring-graphite-400/40" style={box}>
         {layers.map((scale) => (
           <Page
             key={scale}
+            pdf={pdf}
             className={shown !== null && scale !== shown ? "sheet-layer-pending" : undefined}
             pageNumber={pageNumber}
             scale={scale}
@@ -77,6 +78,6 @@ export default function PdfPageLayer(props: PdfPageLayerProps) {
         ))}
       </div>
       {page && view && <DetailTile page={page} rotation={rotation} region={detail} dpr={dpr} view={view} />}
-    </Document>
+    </>
   );
 }

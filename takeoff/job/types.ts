@@ -21,12 +21,38 @@ export interface TakeoffSettings {
   planSeconds?: number;
 }
 
+export type OpeningKindName = "window" | "mulled" | "door" | "round-top";
+
+/**
+ * A kind's own fields, as an opening type stores them. mulled: `widths` (two or more, left to right,
+ * each jamb to jamb; `width` is then the whole span Σwidths + (n−1)·mullGap) and `mullGap`. door: `sides`
+ * (1 exterior, 2 interior; `height` is floor to the underside of the head jamb; no setback). round-top:
+ * `springHeight` (`height` is then springHeight + width/2, the whole opening).
+ */
+export interface OpeningShape {
+  widths?: number[];
+  mullGap?: number;
+  sides?: 1 | 2;
+  springHeight?: number;
+}
+
 export interface TakeoffInputs {
   settings: TakeoffSettings;
   /** An alternate: one casing item used for every window instead of each type's own profile. */
   casingItemId: string | null;
   unitTypes: { id: string; name: string; count: number }[];
-  openingTypes: { id: string; mark: string; width: number; height: number; setback: number; trimSpec: TrimSpec }[];
+  openingTypes: {
+    id: string;
+    mark: string;
+    width: number;
+    height: number;
+    setback: number;
+    trimSpec: TrimSpec;
+    /** The opening's kind; absent = "window" (takeoffs saved before kinds existed). */
+    kind?: OpeningKindName;
+    /** The kind's own fields beyond width, height and setback (see OpeningShape). */
+    shape?: OpeningShape;
+  }[];
   /**
    * Price what the price book lacks with clearly named placeholders instead of refusing the run.
    * Absent in takeoffs saved before placeholders existed (= false). A bid with placeholders cannot be submitted.

@@ -4,7 +4,15 @@ import { trimSpecShape } from "./opening-types";
 import { orgPath } from "./org-scope";
 
 /** The company's settings as the settings route answers; the page is handed them by the server, so nothing caches them. */
-export const settingsSchema = z.object({ trimDefaults: trimSpecShape, trimDefaultsOwn: z.boolean(), kerf: z.number(), wastePercent: z.number() });
+export const settingsSchema = z.object({
+  trimDefaults: trimSpecShape,
+  trimDefaultsOwn: z.boolean(),
+  kerf: z.number(),
+  wastePercent: z.number(),
+  /** null: rips take the saw kerf. */
+  ripKerf: z.number().nullable(),
+  planSeconds: z.number(),
+});
 export type ClientSettings = z.infer<typeof settingsSchema>;
 
 export const saveSettings = async (orgSlug: string, body: unknown) =>

@@ -2,6 +2,17 @@ import { z } from "zod";
 import { trimSpecSchema } from "@/takeoff";
 import { lengthInput } from "./length";
 
+/**
+ * The board-order time limit, in seconds of the whole run. The default matches the engine's own
+ * (DEFAULT_RUN_PLAN_SECONDS, takeoff/job/types.ts) so a company that never set one sees what it gets.
+ * Half a second still lets a small job prove its orders; a minute is as long as anyone waits for a run.
+ */
+export const PLAN_SECONDS = { default: 2, min: 0.5, max: 60 } as const;
+
+const kerfLimit = (label: string) => lengthInput(label, { allowZero: true }).refine((k) => k <= 0.5, `${label} must be at most 1/2 in.`);
+/** A blank field (the form sends it as "") and null both mean "not set". */
+const blankToNull = (v: unknown) => (v === "" || (typeof v === "string" && v.trim() === "") ? null : v);
+
 /** The company's defaults: the trim spec new window types start from, and the kerf and waste every takeoff uses. */
 export const settingsSchema = z
   .object({
@@ -13,6 +24,19 @@ export const settingsSchema = z
       .number({ error: "Waste allowance must be a number." })
       .min(0, "Waste allowance must not be negative.")
       .max(50, "Waste allowance must be at most 50%.")
+      .optional(),
+    /** The rip cut between strips of one board; null (or blank) = the saw kerf. */
+    ripKerf: z.preprocess(blankToNull, kerfLimit("Rip kerf").nullable()).optional(),
+    /** Seconds a run may spend planning its board orders; null (or blank) = the default. */
+    planSeconds: z
+      .preprocess(
+        blankToNull,
+        z.coerce
+          .number({ error: "Board-order time limit must be a number of seconds." })
+          .min(PLAN_SECONDS.min, `Board-order time limit must be at least ${PLAN_SECONDS.min} seconds.`)
+          .max(PLAN_SECONDS.max, `Board-order time limit must be at most ${PLAN_SECONDS.max} seconds.`)
+          .nullable(),
+      )
       .optional(),
   })
   .strict()

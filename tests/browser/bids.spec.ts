@@ -82,7 +82,7 @@ test("price change, two takeoffs, compare, lock, documents, send", async ({ page
   await test.step("downloads the material order and the bid PDF", async () => {
     const [csv] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Material order (CSV)" }).click()]);
     const text = await readFile((await csv.path())!, "utf8");
-    expect(text.split("\r\n")[0]).toBe("material,item,supplier_code,rip_width,stock_length,boards_planned,boards_to_buy,unit_price,extended");
+    expect(text.split("\r\n")[0]).toBe("material,item,supplier_code,rip_width,stock_length,boards_planned,boards_to_buy,unit_price,extended,rip_layout");
     expect(text).toContain("DEMO-C250-FJ");
     const [pdf] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Bid summary (PDF)" }).click()]);
     const body = await pdfText((await pdf.path())!);

@@ -76,6 +76,70 @@ describe("company settings", () => {
     expect(created.json.openingType).toMatchObject({ trimSpec: spec });
     const { priceBookId } = await addTestPriceBook(home.org.id);
     const run = await call(takeoffsRoute.POST, { method: "POST", path: "/x", params, body: { name: "With our settings", priceBookId }, cookie });
-    expect((run.json.takeoff as TakeoffView).inputs.settings).toEqual({ kerf: 3 / 32, wastePercent: 5 });
+    // No rip kerf set: the engine rips with the saw kerf; the time limit is the default, written down.
+    expect((run.json.takeoff as TakeoffView).inputs.settings).toEqual({ kerf: 3 / 32, wastePercent: 5, planSeconds: 2 });
+  });
+});
+
+describe("rip kerf and board-order time limit", () => {
+  const read = async (actor: Actor = "admin") =>
+    (await call(settingsRoute.GET, { method: "GET", path: "/x", params: { orgSlug: home.org.slug }, cookie: await cookieOf(actor) })).json.settings as {
+      kerf: number;
+      ripKerf: number | null;
+      planSeconds: number;
+    };
+
+  it("until set, rips take the saw kerf (null) and the time limit is 2 s", async () => {
+    expect(await read()).toMatchObject({ ripKerf: null, planSeconds: 2 });
+  });
+
+  it.each([
+    ["admin", 200],
+    ["estimator", 403],
+    ["project_manager", 403],
+    ["outsider", 404],
+    ["anonymous", 401],
+  ] as const)("%s changing them → %i", async (actor, status) => {
+    const before = await snapshot();
+    expect((await patch({ ripKerf: "3/32", planSeconds: 10 }, actor)).status).toBe(status);
+    if (status !== 200) expect(await snapshot()).toBe(before);
+    else expect(await read()).toMatchObject({ ripKerf: 3 / 32, planSeconds: 10 });
+  });
+
+  it.each([
+    [{ ripKerf: "3/4" }, "ripKerf", /Rip kerf must be at most 1\/2 in/],
+    [{ ripKerf: "thin" }, "ripKerf", /Rip kerf: write a length/],
+    [{ ripKerf: -0.125 }, "ripKerf", /Rip kerf must be zero or more/],
+    [{ planSeconds: 0.25 }, "planSeconds", /at least 0.5 seconds/],
+    [{ planSeconds: 61 }, "planSeconds", /at most 60 seconds/],
+    [{ planSeconds: "soon" }, "planSeconds", /must be a number of seconds/],
+  ])("refuses %j naming %s, changing nothing", async (body, field, message) => {
+    expect((await patch({ ripKerf: "1/8", planSeconds: 4 })).status).toBe(200);
+    const before = await snapshot();
+    const res = await patch(body);
+    expect(res.status).toBe(422);
+    expect(res.json.fields?.[field]).toMatch(message);
+    expect(await snapshot()).toBe(before);
+    expect(await read()).toMatchObject({ ripKerf: 1 / 8, planSeconds: 4 });
+  });
+
+  it("a zero rip kerf is kept as zero, blank goes back to the saw kerf, and other changes leave both alone", async () => {
+    expect((await patch({ ripKerf: "0", planSeconds: "0.5" })).status).toBe(200);
+    expect(await read()).toMatchObject({ ripKerf: 0, planSeconds: 0.5 });
+    expect((await patch({ wastePercent: 12, kerf: "1/8" })).status).toBe(200);
+    expect(await read()).toMatchObject({ ripKerf: 0, planSeconds: 0.5 });
+    expect((await patch({ ripKerf: "", planSeconds: null })).status).toBe(200);
+    expect(await read()).toMatchObject({ ripKerf: null, planSeconds: 2 });
+  });
+
+  it("every takeoff run copies them into its inputs", async () => {
+    expect((await patch({ kerf: "1/8", ripKerf: "5/32", planSeconds: 0.5 })).status).toBe(200);
+    const params = { orgSlug: home.org.slug, projectId: home.project.id };
+    const cookie = await cookieOf("estimator");
+    await call(openingTypesRoute.POST, { method: "POST", path: "/x", params, body: { mark: "W9", width: 30, height: 40, setback: 1.25 }, cookie });
+    const { priceBookId } = await addTestPriceBook(home.org.id);
+    const run = await call(takeoffsRoute.POST, { method: "POST", path: "/x", params, body: { name: "Ripped", priceBookId }, cookie });
+    expect(run.status).toBe(201);
+    expect((run.json.takeoff as TakeoffView).inputs.settings).toEqual({ kerf: 1 / 8, wastePercent: 10, ripKerf: 5 / 32, planSeconds: 0.5 });
   });
 });

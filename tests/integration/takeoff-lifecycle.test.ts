@@ -9,6 +9,7 @@ import * as sendsRoute from "@/app/api/orgs/[orgSlug]/projects/[projectId]/takeo
 import type { Role } from "@/db/schema";
 import type { TakeoffView } from "@/lib/server/takeoffs/takeoffs";
 import { outboxDir } from "@/lib/env";
+import { parseCsv } from "@/lib/price-books/csv-grammar";
 import { readOutbox } from "@/lib/mail/outbox";
 import { call, sessionCookie } from "./helpers/http";
 import { snapshot } from "./helpers/snapshot";
@@ -80,9 +81,13 @@ describe("documents out", () => {
     const res = await fetchRaw(orderRoute.GET, await cookieOf("project_manager"));
     expect(res.headers.get("content-type")).toMatch(/text\/csv/);
     expect(res.headers.get("content-disposition")).toContain('filename="base-bid-order.csv"');
-    const lines = (await res.text()).trim().split("\r\n");
-    expect(lines[0]).toBe("material,item,supplier_code,rip_width,stock_length,boards_planned,boards_to_buy,unit_price,extended");
-    const extended = lines.slice(1).map((l) => Number(l.split(",").at(-1)));
+    const text = await res.text();
+    expect(text.split("\r\n")[0]).toBe("material,item,supplier_code,rip_width,stock_length,boards_planned,boards_to_buy,unit_price,extended,rip_layout");
+    // Parsed, not split on commas: rip widths and layouts are quoted cells with commas in them.
+    const parsed = parseCsv(text);
+    if (!parsed.ok) throw new Error(parsed.message);
+    const [header, ...rows] = parsed.records.map((r) => r.fields);
+    const extended = rows.map((r) => Number(r[header!.indexOf("extended")]));
     expect(extended.reduce((a, b) => a + b, 0)).toBeCloseTo(takeoff.result.bid.material, 2);
   });
 

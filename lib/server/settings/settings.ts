@@ -1,9 +1,13 @@
 import { findSettings, writeSettings } from "@/db/queries/settings";
 import { FALLBACK_TRIM_SPEC } from "@/lib/plans/default-trim";
 import { DEFAULT_TAKEOFF_SETTINGS } from "@/lib/takeoffs/settings";
-import type { SettingsInput } from "@/lib/validators/settings";
+import { PLAN_SECONDS, type SettingsInput } from "@/lib/validators/settings";
+import type { TakeoffSettings } from "@/takeoff";
 
-/** The organisation's defaults as in effect (its own where set, else the product's), and whether each is its own. */
+/**
+ * The organisation's defaults as in effect (its own where set, else the product's), and whether each is its own.
+ * `ripKerf` is null while the company has set none: rips then take the saw kerf.
+ */
 export async function getSettings({ orgId }: { orgId: string }) {
   const row = await findSettings({ orgId });
   return {
@@ -11,17 +15,23 @@ export async function getSettings({ orgId }: { orgId: string }) {
     trimDefaultsOwn: !!row.trimDefaults,
     kerf: row.takeoff?.kerf ?? DEFAULT_TAKEOFF_SETTINGS.kerf,
     wastePercent: row.takeoff?.wastePercent ?? DEFAULT_TAKEOFF_SETTINGS.wastePercent,
+    ripKerf: row.takeoff?.ripKerf ?? null,
+    planSeconds: row.takeoff?.planSeconds ?? PLAN_SECONDS.default,
   };
 }
 
+/** A field absent from the input keeps what is stored; null clears it back to the default. */
 export async function updateSettings({ orgId }: { orgId: string }, input: SettingsInput) {
-  const current = await getSettings({ orgId });
-  await writeSettings(
-    { orgId },
-    {
-      ...(input.trimDefaults !== undefined ? { trimDefaults: input.trimDefaults } : {}),
-      takeoff: { kerf: input.kerf ?? current.kerf, wastePercent: input.wastePercent ?? current.wastePercent },
-    },
-  );
+  const row = await findSettings({ orgId });
+  const current = row.takeoff;
+  const ripKerf = input.ripKerf === undefined ? current?.ripKerf : (input.ripKerf ?? undefined);
+  const planSeconds = input.planSeconds === undefined ? current?.planSeconds : (input.planSeconds ?? undefined);
+  const takeoff: TakeoffSettings = {
+    kerf: input.kerf ?? current?.kerf ?? DEFAULT_TAKEOFF_SETTINGS.kerf,
+    wastePercent: input.wastePercent ?? current?.wastePercent ?? DEFAULT_TAKEOFF_SETTINGS.wastePercent,
+    ...(ripKerf !== undefined ? { ripKerf } : {}),
+    ...(planSeconds !== undefined ? { planSeconds } : {}),
+  };
+  await writeSettings({ orgId }, { ...(input.trimDefaults !== undefined ? { trimDefaults: input.trimDefaults } : {}), takeoff });
   return getSettings({ orgId });
 }

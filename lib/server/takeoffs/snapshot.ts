@@ -7,11 +7,20 @@ import { invalid } from "@/lib/errors";
 import { getSettings } from "@/lib/server/settings/settings";
 import type { TakeoffInputs, TakeoffPrices } from "@/takeoff";
 
-/** The window list, unit types and counts as they are now, with the company's kerf and waste. */
+/**
+ * The window list, unit types and counts as they are now, with the company's kerf, waste, rip kerf and
+ * board-order time limit. The rip kerf is left out while the company has none (the engine then rips with
+ * the saw kerf); the time limit is always written, so a takeoff records the budget it was planned with.
+ */
 export async function snapshotInputs(s: ProjectScope, casingItemId: string | null, allowPlaceholders: boolean): Promise<TakeoffInputs> {
   const [settings, openingTypes, unitTypes, counts] = await Promise.all([getSettings(s), listOpeningTypes(s), listUnitTypes(s), getCounts(s)]);
   return {
-    settings: { kerf: settings.kerf, wastePercent: settings.wastePercent },
+    settings: {
+      kerf: settings.kerf,
+      wastePercent: settings.wastePercent,
+      ...(settings.ripKerf !== null ? { ripKerf: settings.ripKerf } : {}),
+      planSeconds: settings.planSeconds,
+    },
     casingItemId,
     ...(allowPlaceholders ? { allowPlaceholders: true } : {}),
     unitTypes: unitTypes.map((u) => ({ id: u.id, name: u.name, count: u.count })),

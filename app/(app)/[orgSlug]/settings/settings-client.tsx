@@ -1,13 +1,13 @@
 "use client";
 
-import type { FormEvent } from "react";
+import { useState, type FormEvent } from "react";
 import { Card, Notice } from "@/components/ui/card";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { FormError, SubmitButton } from "@/components/ui/form-error";
 import { saveSettings, type ClientSettings } from "@/lib/client/settings";
 import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
-import { settingsSchema } from "@/lib/validators/settings";
+import { PLAN_SECONDS, settingsSchema } from "@/lib/validators/settings";
 import { formatLengthExact, parseLength } from "@/takeoff";
 
 const LENGTHS = ["casingWidth", "casingThickness", "reveal", "stoolHorn", "stoolProjection", "apronInset", "extensionThickness"] as const;
@@ -26,12 +26,16 @@ const FIELD_NAMES: Record<string, string> = {
   "trimDefaults.style": "Style",
   kerf: "Saw kerf",
   wastePercent: "Waste allowance",
+  ripKerf: "Rip kerf",
+  planSeconds: "Board-order time limit",
   _: "Settings",
 };
 
 /** The company's defaults: what a new window type starts from, and the kerf and waste every takeoff uses. */
 export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; initial: ClientSettings; canWrite: boolean }) {
-  const save = useFormMutation({ mutationFn: (body: unknown) => saveSettings(orgSlug, body) });
+  // What is stored now: the form's untouched fields are compared with it, so they send the stored number back.
+  const [stored, setStored] = useState(initial);
+  const save = useFormMutation({ mutationFn: (body: unknown) => saveSettings(orgSlug, body), onSuccess: (saved: ClientSettings) => setStored(saved) });
   const { errors } = save;
 
   const t = initial.trimDefaults;
@@ -58,7 +62,15 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
       }
     }
     const kerfText = form.kerf?.trim() ?? "";
-    const body = { trimDefaults: spec, kerf: kerfText === len(initial.kerf) ? initial.kerf : kerfText, wastePercent: form.wastePercent };
+    const ripText = form.ripKerf?.trim() ?? "";
+    const body = {
+      trimDefaults: spec,
+      kerf: kerfText === len(stored.kerf) ? stored.kerf : kerfText,
+      wastePercent: form.wastePercent,
+      // Blank: rips take the saw kerf (sent as null, which clears a rip kerf set before).
+      ripKerf: ripText === "" ? null : ripText === len(stored.ripKerf ?? undefined) ? stored.ripKerf : ripText,
+      planSeconds: form.planSeconds,
+    };
     // The API's own schema over the whole form, so every wrong field is named at once, not the first.
     const checked = settingsSchema.safeParse(body);
     const all = { ...(checked.success ? {} : fieldErrorsOf(checked.error)), ...bad };
@@ -103,6 +115,22 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
               </Field>
               <Field label="Waste allowance (%)" name="wastePercent" error={errors.wastePercent} hint="Extra boards for defects and miscuts.">
                 <TextInput name="wastePercent" inputMode="decimal" defaultValue={String(initial.wastePercent)} error={errors.wastePercent} />
+              </Field>
+              <Field
+                label="Rip kerf"
+                name="ripKerf"
+                error={errors.ripKerf}
+                hint="Taken by each rip between strips of one board, e.g. 1/8 for a full-kerf table-saw blade. Blank: the saw kerf."
+              >
+                <TextInput name="ripKerf" defaultValue={len(initial.ripKerf ?? undefined)} placeholder={`Saw kerf (${len(initial.kerf)})`} error={errors.ripKerf} />
+              </Field>
+              <Field
+                label="Board-order time limit (seconds)"
+                name="planSeconds"
+                error={errors.planSeconds}
+                hint={`How long a takeoff may search for the cheapest board orders, ${PLAN_SECONDS.min} to ${PLAN_SECONDS.max} s (default ${PLAN_SECONDS.default}). On large jobs a longer limit can find cheaper orders; each run takes up to this long.`}
+              >
+                <TextInput name="planSeconds" inputMode="decimal" defaultValue={String(initial.planSeconds)} error={errors.planSeconds} />
               </Field>
             </div>
           </Card>

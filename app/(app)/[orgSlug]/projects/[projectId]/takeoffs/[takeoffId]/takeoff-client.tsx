@@ -65,7 +65,7 @@ export function TakeoffResultView({
       <Part id="per-job" title="Job totals" intro="Materials for the whole job, the boards to order and the bid.">
         <JobMaterials result={result} />
         <h3 className="pt-2 text-lg font-semibold">Board order</h3>
-        <BoardOrderTable orders={result.orders} />
+        <BoardOrderTable orders={result.orders} items={prices.items} settingsHref={`/${orgSlug}/settings`} planSeconds={t.inputs.settings.planSeconds} />
         <h3 className="pt-2 text-lg font-semibold">Bid</h3>
         <div className="space-y-6 rounded-lg border border-maple-200 bg-white p-4">
           <BidSummary result={result} prices={prices} />

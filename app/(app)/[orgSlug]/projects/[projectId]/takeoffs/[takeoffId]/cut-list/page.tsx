@@ -9,11 +9,15 @@ import { crewCutList } from "@/lib/takeoffs/crew-cut-list";
 import { tapeLength } from "@/lib/takeoffs/format";
 import { endsText, PART_LABELS, STYLE_NAMES } from "@/lib/takeoffs/labels";
 import { PrintButton } from "@/components/takeoffs/print-button";
+import { RippingPlan } from "@/components/takeoffs/ripping-plan";
 import { SafetyCautions } from "@/components/takeoff-actions/safety-cautions";
 
 export const metadata: Metadata = { title: "Cut list" };
 
-/** The installers' cut list, printable on letter paper, with the shop-floor cautions first. */
+/**
+ * The installers' cut list, printable on letter paper, with the shop-floor cautions first; boards ripped to
+ * several strip widths get their ripping and cutting plan (with the table-saw cautions) before the pieces.
+ */
 export default async function CutListPage({ params }: { params: Promise<{ orgSlug: string; projectId: string; takeoffId: string }> }) {
   const { orgSlug, projectId, takeoffId } = await params;
   const { org } = await requireOrg(orgSlug);
@@ -34,6 +38,7 @@ export default async function CutListPage({ params }: { params: Promise<{ orgSlu
       </div>
       <h1 className="text-2xl font-bold">Cut list — {t.name}</h1>
       <SafetyCautions />
+      <RippingPlan orders={t.result.orders} />
       {groups.map((g) => (
         <section key={g.title} className="space-y-3 break-inside-avoid-page">
           <h2 className="text-xl font-bold">

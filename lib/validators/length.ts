@@ -3,15 +3,16 @@ import { parseLength } from "@/takeoff";
 
 /**
  * A length as people type it (25 7/8, 2'-1 7/8", 635 mm …) or as a number of inches, parsed by the
- * engine so forms, the API and the engine agree on what a length means.
+ * engine so forms, the API and the engine agree on what a length means. `example` suits the message to
+ * the field (a kerf is never 2'-11 1/2").
  */
-export const lengthInput = (label: string, opts: { allowZero?: boolean } = {}) =>
+export const lengthInput = (label: string, opts: { allowZero?: boolean; example?: string } = {}) =>
   z.union([z.number(), z.string()], { error: `${label} is required.` }).transform((value, ctx) => {
     let inches: number;
     try {
       inches = typeof value === "number" ? value : parseLength(value);
     } catch {
-      ctx.addIssue({ code: "custom", message: `${label}: write a length such as 35 1/2, 2'-11 1/2" or 902 mm.` });
+      ctx.addIssue({ code: "custom", message: `${label}: write a length such as ${opts.example ?? `35 1/2, 2'-11 1/2" or 902 mm`}.` });
       return z.NEVER;
     }
     if (!Number.isFinite(inches) || inches < 0 || (!opts.allowZero && inches === 0)) {

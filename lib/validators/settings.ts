@@ -7,9 +7,11 @@ import { lengthInput } from "./length";
  * (DEFAULT_RUN_PLAN_SECONDS, takeoff/job/types.ts) so a company that never set one sees what it gets.
  * Half a second still lets a small job prove its orders; a minute is as long as anyone waits for a run.
  */
+const KERF_EXAMPLE = "1/8, 3/32 or 3 mm";
+
 export const PLAN_SECONDS = { default: 2, min: 0.5, max: 60 } as const;
 
-const kerfLimit = (label: string) => lengthInput(label, { allowZero: true }).refine((k) => k <= 0.5, `${label} must be at most 1/2 in.`);
+const kerfLimit = (label: string) => lengthInput(label, { allowZero: true, example: KERF_EXAMPLE }).refine((k) => k <= 0.5, `${label} must be at most 1/2 in.`);
 /** A blank field (the form sends it as "") and null both mean "not set". */
 const blankToNull = (v: unknown) => (v === "" || (typeof v === "string" && v.trim() === "") ? null : v);
 
@@ -17,7 +19,7 @@ const blankToNull = (v: unknown) => (v === "" || (typeof v === "string" && v.tri
 export const settingsSchema = z
   .object({
     trimDefaults: trimSpecSchema.nullable().optional(),
-    kerf: lengthInput("Kerf", { allowZero: true })
+    kerf: lengthInput("Kerf", { allowZero: true, example: KERF_EXAMPLE })
       .refine((k) => k <= 0.5, "Kerf must be at most 1/2 in.")
       .optional(),
     wastePercent: z.coerce

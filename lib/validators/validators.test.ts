@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { fieldErrors } from "@/lib/errors";
 import { createProjectSchema, updateProjectSchema } from "./project";
+import { settingsSchema } from "./settings";
 import { signUpSchema } from "./user";
 
 const errorsOf = (r: { success: boolean; error?: unknown }) => (r.success ? {} : fieldErrors(r.error as never));
@@ -33,5 +34,11 @@ describe("validators shared by forms and the API", () => {
 
   it("refuse an update that names no field", () => {
     expect(errorsOf(updateProjectSchema.safeParse({}))).toEqual({ _: "Nothing to change." });
+  });
+
+  it("give a kerf's own example when it is not a length", () => {
+    // It used to suggest 2'-11 1/2" for a saw kerf, and the form then showed "Saw kerf: Kerf: …".
+    expect(errorsOf(settingsSchema.safeParse({ kerf: "abc" }))).toEqual({ kerf: "Kerf: write a length such as 1/8, 3/32 or 3 mm." });
+    expect(errorsOf(settingsSchema.safeParse({ ripKerf: "wide" }))).toEqual({ ripKerf: "Rip kerf: write a length such as 1/8, 3/32 or 3 mm." });
   });
 });

@@ -137,7 +137,7 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
         </fieldset>
         {count > 0 && (
           <Notice tone="error">
-            {count === 1 ? "One field needs" : `${count} fields need`} attention: {Object.entries(errors).map(([k, m]) => `${FIELD_NAMES[k] ?? k}: ${m}`).join(" · ")}
+            {count === 1 ? "One field needs" : `${count} fields need`} attention: {Object.keys(errors).map((k) => FIELD_NAMES[k] ?? k).join(", ")} (see beside {count === 1 ? "it" : "each"}).
           </Notice>
         )}
         {count === 0 && <FormError form={save} />}

@@ -12,7 +12,6 @@ import { prng } from "@/lib/prng";
 import {
   computeTakeoff,
   wallSetback,
-  type Material,
   type PriceItemSnapshot,
   type TakeoffInputs,
   type TakeoffPrices,
@@ -73,7 +72,7 @@ function generateJob(jobNumber: number): TakeoffInputs {
 /** Per-foot prices that are deliberately not proportional across lengths. */
 const lengths = (perFoot: Record<number, number>) =>
   Object.entries(perFoot).map(([feet, price]) => ({ length: Number(feet) * 12, price: Math.round(Number(feet) * price * 100) / 100 }));
-const item = (id: string, kind: Material, faceWidth: number, thickness: number, stock: PriceItemSnapshot["stock"]): PriceItemSnapshot => ({
+const item = (id: string, kind: PriceItemSnapshot["kind"], faceWidth: number, thickness: number, stock: PriceItemSnapshot["stock"]): PriceItemSnapshot => ({
   id, name: id, kind, faceWidth, thickness, species: "poplar", supplierCode: id.toUpperCase(), stock,
 });
 const trim = { 7: 1.49, 8: 1.39, 10: 1.36, 12: 1.41, 14: 1.52, 16: 1.58 };

@@ -4,8 +4,8 @@ import { takeoffLineSchema } from "./schemas";
 import type { CutPiece, Material, Part, TakeoffLine } from "./types";
 import { parseOrThrow } from "./validate";
 
-/** The fixed reporting order of materials: the order a carpenter installs them. */
-export const MATERIALS: readonly Material[] = ["casing", "stool", "apron", "extension"];
+/** The fixed reporting order of materials: the order a carpenter installs them (mullion casing with the casing). */
+export const MATERIALS: readonly Material[] = ["casing", "mullion", "stool", "apron", "extension"];
 
 /** One rounded piece size across a whole job, with the parts that need it. */
 export interface PieceDemand {
@@ -46,10 +46,18 @@ export function jobPieces(lines: readonly TakeoffLine[]): { piece: CutPiece; cou
   return out;
 }
 
-/** Job pieces merged by material, width and rounded length (what the saw sees). */
+/**
+ * Straight job pieces merged by material, width and rounded length (what the saw sees). Curved pieces
+ * (those with a radius) are not cut from straight stock; takeoffTotals counts them apart.
+ */
 export function pieceDemand(lines: readonly TakeoffLine[]): PieceDemand[] {
+  return mergeDemand(jobPieces(lines));
+}
+
+export function mergeDemand(pieces: readonly { piece: CutPiece; count: number }[]): PieceDemand[] {
   const merged = new Map<string, PieceDemand>();
-  for (const { piece, count } of jobPieces(lines)) {
+  for (const { piece, count } of pieces) {
+    if (piece.radius !== undefined) continue;
     const key = `${piece.material}|${piece.width ?? ""}|${piece.length}`;
     const d = merged.get(key);
     if (d) {

@@ -1,21 +1,32 @@
 /** Public entry of the takeoff engine: re-exports only. */
 export type {
+  ArchSegments,
+  BayOpening,
   BoardPattern,
+  CurvedTotal,
   CutPiece,
+  DoorOpening,
   Demand,
   End,
   Material,
   MaterialTotal,
+  MulledOpening,
   Opening,
+  OpeningKind,
   Part,
   PlanOptions,
+  RoundTopOpening,
+  SegmentTopOpening,
   StockItem,
   StockPlan,
   Style,
   TakeoffLine,
   TrimSpec,
+  WindowOpening,
 } from "./types";
 export { cutList } from "./cut-list";
+export { splitLongPieces, type ScarfOptions } from "./kinds/scarf";
+export { archSegments } from "./kinds/arch-segments";
 export { takeoffTotals } from "./totals";
 export { pieceDemand, MATERIALS, type PieceDemand } from "./demand";
 export { planStock } from "./stock-plan/plan-stock";
@@ -27,16 +38,23 @@ export { wallSetback, wallBuildUpSchema, type WallBuildUp } from "./wall-build-u
 export { DRESSED_LUMBER, GYPSUM_BOARD_THICKNESS, type GypsumBoard, type NominalLumber, type StudSize } from "./nominal-sizes";
 export { TRIM_DEFAULTS } from "./trim-defaults";
 export {
+  bayOpeningSchema,
   bidRatesSchema,
   demandSchema,
+  doorOpeningSchema,
   labourRatesSchema,
   lengthTextSchema,
+  mulledOpeningSchema,
+  OPENING_KINDS,
   openingSchema,
   planOptionsSchema,
+  roundTopOpeningSchema,
+  segmentTopOpeningSchema,
   stockItemSchema,
   styleSchema,
   takeoffLineSchema,
   trimSpecSchema,
+  windowOpeningSchema,
 } from "./schemas";
 
 // A whole job from its snapshots: what a takeoff run executes and what a saved takeoff stores.

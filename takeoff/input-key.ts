@@ -1,6 +1,7 @@
 import type { Opening, TrimSpec } from "./types";
 
-const OPENING_FIELDS = ["width", "height", "setback"] as const;
+/** Every field of every opening kind; a kind's absent fields read as undefined and so never collide. */
+const OPENING_FIELDS = ["kind", "width", "height", "setback", "widths", "mullGap", "sides", "springHeight", "rise", "turn", "seat"] as const;
 const SPEC_FIELDS = [
   "style",
   "casingWidth",
@@ -11,11 +12,15 @@ const SPEC_FIELDS = [
   "apronInset",
   "apronReturns",
   "extensionThickness",
+  "curvedCasing",
+  "segmentBoardWidth",
 ] as const;
 
-/** Numbers as themselves; anything else tagged with its type (numbers never contain ":"). */
+/** Numbers as themselves; lists element by element; anything else tagged with its type (numbers never contain ":"). */
 function part(v: unknown): string {
-  return typeof v === "number" ? String(v) : `${typeof v}:${String(v)}`;
+  if (typeof v === "number") return String(v);
+  if (Array.isArray(v)) return `[${v.map(part).join(",")}]`;
+  return `${typeof v}:${String(v)}`;
 }
 
 /**

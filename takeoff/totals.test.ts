@@ -79,3 +79,24 @@ describe("takeoffTotals", () => {
     expect(takeoffTotals([])).toEqual([]);
   });
 });
+
+describe("takeoffTotals with opening kinds", () => {
+  it("reports mullion casing as its own material, after the casing", () => {
+    const totals = takeoffTotals([
+      { opening: { kind: "mulled", widths: [30, 30, 30], height: 50, setback: 0, mullGap: 3.5 }, spec: sa, quantity: 4 },
+      { opening: { kind: "door", width: 30, height: 81, sides: 2 }, spec: sa, quantity: 1 },
+    ]);
+    expect(totals.map((t) => t.material)).toEqual(["casing", "mullion", "stool", "apron"]);
+    // Two mullion casings per triple, each H + r = 50 1/8.
+    expect(totals[1]).toEqual({ material: "mullion", pieces: 8, linearInches: 8 * 50.125, linearFeet: (8 * 50.125) / 12 });
+  });
+
+  it("keeps curved pieces out of the straight stock demand and the straight totals", () => {
+    const lines: TakeoffLine[] = [{ opening: { kind: "round-top", width: 36, springHeight: 30, setback: 1 }, spec: sa, quantity: 2 }];
+    expect(pieceDemand(lines).some((d) => d.parts.includes("casing-arch") || d.parts.includes("extension-arch"))).toBe(false);
+    const straightCasing = cutList(lines[0]!.opening, sa).filter((p) => p.material === "casing" && p.radius === undefined);
+    const casing = takeoffTotals(lines).find((t) => t.material === "casing");
+    expect(casing?.linearInches).toBe(2 * straightCasing.reduce((sum, p) => sum + p.quantity * p.length, 0));
+    expect(casing?.curved?.[0]).toMatchObject({ part: "casing-arch", radius: 18.125, pieces: 2 });
+  });
+});

@@ -1,6 +1,6 @@
 import { exact, Fraction } from "./exact";
-import { openingSchema, trimSpecSchema } from "./schemas";
-import type { Opening, Style, TrimSpec } from "./types";
+import { trimSpecSchema, windowOpeningSchema } from "./schemas";
+import type { Style, TrimSpec, WindowOpening } from "./types";
 import { parseOrThrow } from "./validate";
 
 /** Reveal 1/8 in: within the 1/16–1/8 in reveal finish carpenters leave (common practice). */
@@ -71,7 +71,7 @@ export function resolveSpec(spec: TrimSpec): ResolvedSpec {
   };
 }
 
-export function resolveOpening(opening: Opening): ResolvedOpening {
-  const o = parseOrThrow(openingSchema, opening);
+export function resolveOpening(opening: WindowOpening): ResolvedOpening {
+  const o = parseOrThrow(windowOpeningSchema, opening);
   return { width: exact(o.width), height: exact(o.height), setback: exact(o.setback) };
 }

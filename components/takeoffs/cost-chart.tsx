@@ -10,6 +10,7 @@ const ROW = 20;
 // Materials in wood tones, the rest in shop colours; every segment is also named under the bar.
 const FILL: Record<SegmentKey, string> = {
   casing: "fill-spruce-800",
+  mullion: "fill-spruce-700",
   stool: "fill-maple-300",
   apron: "fill-spruce-100",
   extension: "fill-spruce-600",
@@ -19,7 +20,7 @@ const FILL: Record<SegmentKey, string> = {
 };
 
 // Dark fills carry white text inside; light ones graphite (both pairs meet WCAG AA).
-const DARK = new Set<SegmentKey>(["casing", "extension", "markup"]);
+const DARK = new Set<SegmentKey>(["casing", "mullion", "extension", "markup"]);
 
 /** One bar for the bid, split by where the money goes, with a table for screen readers. */
 export function CostChart({ result }: { result: TakeoffResult }) {

@@ -9,6 +9,8 @@ const SHAPES: Record<End, string[]> = {
   square: ["M1 3.5H19V9.5H1Z"],
   miter: ["M1 3.5H19L13 9.5H1Z"],
   return: ["M1 2.5H19L15 6.5H1Z", "M19 2.5V11.5H15V6.5Z"],
+  bevel: ["M1 3.5H17L19 9.5H1Z"],
+  scarf: ["M1 3.5H19L11 9.5H1Z"],
 };
 
 export function EndGlyph({ end, side = "right" }: { end: End; side?: "left" | "right" }) {

@@ -5,16 +5,21 @@ export const PART_LABELS: Record<Part, string> = {
   "casing-leg": "Casing leg",
   "casing-head": "Casing head",
   "casing-bottom": "Casing bottom",
+  "casing-arch": "Casing arch",
+  "mullion-casing": "Mullion casing",
+  "seat-board": "Seat board",
   stool: "Stool",
   apron: "Apron",
   "apron-return": "Apron return",
   "extension-side": "Jamb extension, side",
   "extension-head": "Jamb extension, head",
   "extension-bottom": "Jamb extension, bottom",
+  "extension-arch": "Jamb extension, arch",
 };
 
 export const MATERIAL_LABELS: Record<Material, string> = {
   casing: "Casing",
+  mullion: "Mullion casing",
   stool: "Stool",
   apron: "Apron",
   extension: "Jamb extension",
@@ -30,6 +35,8 @@ export const END_LABELS: Record<End, string> = {
   square: "Square",
   miter: "Miter (long point)",
   return: "Return miter",
+  bevel: "Bevel (long point on the back)",
+  scarf: "Scarf joint",
 };
 
 /** Both ends in words: "Square both ends", or "Square / Miter (long point)" when they differ. */

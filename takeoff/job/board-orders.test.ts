@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { cutList } from "../cut-list";
 import { checkPlan } from "../testing/plan-check";
 import { takeoffTotals } from "../totals";
-import type { Demand, Material, TrimSpec } from "../types";
+import type { Demand, TrimSpec } from "../types";
 import { computeTakeoff } from "./compute";
 import { PriceGaps } from "./errors";
 import type { PriceItemSnapshot, TakeoffInputs, TakeoffPrices } from "./types";
@@ -23,7 +23,7 @@ const inputs = (setbackA = 1.1875): TakeoffInputs => ({
 });
 
 const feet = (ft: number[], perFoot: number) => ft.map((f) => ({ length: f * 12, price: Math.round(f * perFoot * 100) / 100 }));
-const item = (id: string, kind: Material, faceWidth: number, thickness: number, stock: PriceItemSnapshot["stock"]): PriceItemSnapshot => ({
+const item = (id: string, kind: PriceItemSnapshot["kind"], faceWidth: number, thickness: number, stock: PriceItemSnapshot["stock"]): PriceItemSnapshot => ({
   id, name: id, kind, faceWidth, thickness, species: null, supplierCode: null, stock,
 });
 const prices = (items?: PriceItemSnapshot[]): TakeoffPrices => ({

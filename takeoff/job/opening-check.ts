@@ -23,7 +23,7 @@ export function checkOpening(opening: Opening, spec: TrimSpec): { pieces: CutPie
     const text = error instanceof Error ? error.message : String(error);
     const [, name = "", detail = text] = /^(?:spec\.|opening\.)?(\w+)(?:\.\w+)*: (.*)$/s.exec(text) ?? [];
     const field = OPENING_FIELDS.has(name) ? name : name ? `trimSpec.${name}` : "trimSpec";
-    if (name === "apronInset" && spec.apronInset !== undefined) {
+    if (name === "apronInset" && spec.apronInset !== undefined && "width" in opening) {
       // The apron spans the casing's outer edges less the inset at each end (cut-list.ts, stool-and-apron).
       const reveal = spec.reveal ?? 0.125;
       const across = opening.width + 2 * reveal + 2 * spec.casingWidth;

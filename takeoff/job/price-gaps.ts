@@ -9,12 +9,16 @@ const PART_NAMES: Record<CutPiece["part"], string> = {
   "casing-leg": "casing leg",
   "casing-head": "casing head",
   "casing-bottom": "bottom casing",
+  "casing-arch": "casing arch",
+  "mullion-casing": "mullion casing",
+  "seat-board": "seat board",
   stool: "stool",
   apron: "apron",
   "apron-return": "apron return",
   "extension-side": "jamb extension side",
   "extension-head": "jamb extension head",
   "extension-bottom": "jamb extension bottom",
+  "extension-arch": "jamb extension arch",
 };
 
 /** One line of the window list as the takeoff sees it. */
@@ -136,7 +140,7 @@ export function placeholdersFor(gaps: PriceGap[], prices: TakeoffPrices, kerf: n
       item: {
         id: `placeholder:${key}`,
         name: `PLACEHOLDER ${g.material} ${g.kind === "too-long" ? `${formatLength(length, { style: "feet-inches" })} long` : `${formatLength(g.width)}${g.thickness ? ` × ${formatLength(g.thickness)}` : " wide"}`} (not in the price book)`,
-        kind: g.material,
+        kind: g.material === "mullion" ? "casing" : g.material,
         faceWidth: g.width,
         thickness: g.thickness,
         species: null,

@@ -65,7 +65,7 @@ export interface TakeoffInputs {
 export interface PriceItemSnapshot {
   id: string;
   name: string;
-  kind: Material | "other";
+  kind: Exclude<Material, "mullion"> | "other";
   faceWidth: number;
   thickness: number;
   species: string | null;

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { cutList } from "../cut-list";
 import { testInputs, testPrices } from "../testing/job-fixtures";
+import { openingOf } from "./opening-of";
 import { computeTakeoff } from "./compute";
 import { MissingItem } from "./errors";
 
@@ -25,7 +26,7 @@ describe("computeTakeoff", () => {
     const result = await computeTakeoff(inputs, testPrices());
     for (const ot of inputs.openingTypes) {
       const q = inputs.counts.job[ot.id]!;
-      for (const piece of cutList(ot, ot.trimSpec)) {
+      for (const piece of cutList(openingOf(ot), ot.trimSpec)) {
         const item = result.openingTypes.find((o) => o.openingTypeId === ot.id)!.items[piece.material]!;
         const order = result.orders.find((o) => o.itemId === item && o.material === piece.material && (o.width ?? null) === (piece.material === "extension" ? piece.width : null));
         const cut = order!.plan.boards.flatMap((b) => Array<number[]>(b.count).fill(b.cuts)).flat().filter((c) => c === piece.length).length;

@@ -5,7 +5,7 @@
  * field added later is optional.
  */
 import type { Bid, LabourRates } from "../pricing";
-import type { CutPiece, Material, MaterialTotal, StockPlan, TrimSpec } from "../types";
+import type { CutPiece, Material, MaterialTotal, OpeningKind, StockPlan, TrimSpec } from "../types";
 
 export interface TakeoffSettings {
   /** Saw kerf taken by every cut. */
@@ -21,7 +21,7 @@ export interface TakeoffSettings {
   planSeconds?: number;
 }
 
-export type OpeningKindName = "window" | "mulled" | "door" | "round-top";
+export type OpeningKindName = OpeningKind;
 
 /**
  * A kind's own fields, as an opening type stores them. mulled: `widths` (two or more, left to right,
@@ -34,6 +34,11 @@ export interface OpeningShape {
   mullGap?: number;
   sides?: 1 | 2;
   springHeight?: number;
+  /** segment-top: the arch's rise above the spring line. */
+  rise?: number;
+  /** bay: the angle each corner turns, degrees; `widths` are the units, left to right. */
+  turn?: number;
+  seat?: "segments" | "one-piece";
 }
 
 export interface TakeoffInputs {

@@ -1,15 +1,58 @@
 import { jobPieces } from "./demand";
 import { exact, Fraction, roundToCents } from "./exact";
 import { bidRatesSchema, labourRatesSchema } from "./schemas";
-import type { Style, TakeoffLine } from "./types";
+import type { z } from "zod";
+import type { Opening, Style, TakeoffLine } from "./types";
 import { parseOrThrow } from "./validate";
 
-/** A contractor's own production rates; no defaults, crews differ too much. */
+/**
+ * A contractor's own production rates; no defaults, crews differ too much. The per-kind rates are
+ * optional because price books written before opening kinds lack them (see kindMinutes for what an
+ * absent one means).
+ */
 export interface LabourRates {
   minutesPerOpening: Record<Style, number>;
   /** Extensions are ripped, glued and fitted per foot, so they are priced on length. */
   minutesPerExtensionFoot: number;
   hourlyRate: number;
+  /** A door is cased per side (two legs and a head); absent: a picture-frame opening's minutes per side. */
+  minutesPerDoorSide?: number;
+  /** Each mull of a mulled unit or bay (fitting its mullion casing), on top of the opening's minutes; absent: 0. */
+  minutesPerMull?: number;
+  /** A round-top or segment head (fitting the curved casing and extension), on top of the opening's minutes; absent: 0. */
+  minutesArchPremium?: number;
+  /** Each corner of a bay or bow (angled stool, apron and casing joints), on top of its mulls; absent: 0. */
+  minutesPerBayCorner?: number;
+}
+
+type Rates = z.infer<typeof labourRatesSchema>;
+
+/**
+ * Minutes to trim one opening by its kind (common practice: a premium per mull, per arched head and per
+ * bay corner on the style's minutes; doors per side, their style not applying). A door side without its
+ * own rate is priced as a picture-frame opening — three of its four pieces — rather than as nothing.
+ */
+function kindMinutes(opening: Opening, style: Style, r: Rates): Fraction {
+  const base = exact(r.minutesPerOpening[style]);
+  switch (opening.kind ?? "window") {
+    case "door": {
+      const door = opening as Extract<Opening, { kind: "door" }>;
+      return exact(r.minutesPerDoorSide ?? r.minutesPerOpening["picture-frame"]).mul(door.sides);
+    }
+    case "mulled": {
+      const units = (opening as Extract<Opening, { kind: "mulled" }>).widths.length;
+      return base.add(exact(r.minutesPerMull ?? 0).mul(units - 1));
+    }
+    case "bay": {
+      const units = (opening as Extract<Opening, { kind: "bay" }>).widths.length;
+      return base.add(exact((r.minutesPerMull ?? 0) + (r.minutesPerBayCorner ?? 0)).mul(units - 1));
+    }
+    case "round-top":
+    case "segment-top":
+      return base.add(exact(r.minutesArchPremium ?? 0));
+    default:
+      return base;
+  }
 }
 
 export interface BidRates {
@@ -36,7 +79,7 @@ function exactLabourMinutes(lines: readonly TakeoffLine[], rates: LabourRates): 
   const r = parseOrThrow(labourRatesSchema, rates, "rates");
   const pieces = jobPieces(lines); // validates every line first
   let minutes = new Fraction(0);
-  for (const line of lines) minutes = minutes.add(exact(r.minutesPerOpening[line.spec.style]).mul(line.quantity));
+  for (const line of lines) minutes = minutes.add(kindMinutes(line.opening, line.spec.style, r).mul(line.quantity));
   let extensionInches = new Fraction(0);
   for (const { piece, count } of pieces) {
     if (piece.material === "extension") extensionInches = extensionInches.add(exact(piece.length).mul(count));
@@ -44,7 +87,7 @@ function exactLabourMinutes(lines: readonly TakeoffLine[], rates: LabourRates): 
   return minutes.add(extensionInches.div(12).mul(exact(r.minutesPerExtensionFoot)));
 }
 
-/** Labour minutes: per opening by style plus per linear foot of extension (cut lengths). */
+/** Labour minutes: per opening by kind and style plus per linear foot of extension (cut lengths). */
 export function labourMinutes(lines: readonly TakeoffLine[], rates: LabourRates): number {
   return exactLabourMinutes(lines, rates).valueOf();
 }

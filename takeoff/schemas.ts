@@ -138,6 +138,10 @@ export const labourRatesSchema = z.object({
   }),
   minutesPerExtensionFoot: nonNegative("minutes per foot of extension"),
   hourlyRate: nonNegative("hourly rate"),
+  minutesPerDoorSide: nonNegative("minutes per door side").optional(),
+  minutesPerMull: nonNegative("minutes per mull").optional(),
+  minutesArchPremium: nonNegative("minutes added for an arched head").optional(),
+  minutesPerBayCorner: nonNegative("minutes per bay corner").optional(),
 });
 
 export const bidRatesSchema = z.object({

@@ -7,6 +7,7 @@ import { Field, TextInput } from "@/components/ui/field";
 import { ClientError, refusal, request } from "@/lib/client/fetch";
 import { useFormMutation } from "@/lib/client/use-form-mutation";
 import { planRates, rateFieldOf, ratesDraft, type RatesDraft } from "@/lib/price-books/forms";
+import { KIND_RATES } from "@/lib/price-books/kind-rates";
 import { formatMoney, percentText } from "@/lib/price-books/numbers";
 import type { PriceBookSummary } from "@/lib/price-books/types";
 
@@ -15,6 +16,7 @@ const FIELDS: { key: TextKey; label: string; hint: string; unit?: string }[] = [
   { key: "stoolAndApron", label: "Stool-and-apron opening", hint: "minutes each", unit: "min" },
   { key: "pictureFrame", label: "Picture-frame opening", hint: "minutes each", unit: "min" },
   { key: "extensionFoot", label: "Extension", hint: "minutes per linear foot", unit: "min/ft" },
+  ...KIND_RATES.map((r) => ({ key: r.draft, label: r.label, hint: r.hint, unit: "min" })),
   { key: "hourlyRate", label: "Hourly rate", hint: "dollars per hour", unit: "$/h" },
   { key: "markup", label: "Markup", hint: "percent on cost", unit: "%" },
   { key: "taxRate", label: "Sales tax", hint: "percent", unit: "%" },
@@ -26,6 +28,7 @@ function RatesReadOnly({ book }: { book: PriceBookSummary }) {
     ["Stool-and-apron opening", `${book.labour.minutesPerOpening["stool-and-apron"]} min`],
     ["Picture-frame opening", `${book.labour.minutesPerOpening["picture-frame"]} min`],
     ["Extension", `${book.labour.minutesPerExtensionFoot} min/ft`],
+    ...KIND_RATES.map((r): [string, string] => [r.label, book.labour[r.key] === undefined ? "not set" : `${book.labour[r.key]} min`]),
     ["Hourly rate", formatMoney(book.labour.hourlyRate)],
     ["Markup", `${percentText(book.markup)} %`],
     ["Sales tax", `${percentText(book.taxRate)} %${book.taxLabour ? ", labour taxed too" : ", materials only"}`],

@@ -10,6 +10,10 @@ const labour = z.object({
   minutesPerOpening: z.object({ "stool-and-apron": z.number(), "picture-frame": z.number() }),
   minutesPerExtensionFoot: z.number(),
   hourlyRate: z.number(),
+  minutesPerDoorSide: z.number().optional(),
+  minutesPerMull: z.number().optional(),
+  minutesArchPremium: z.number().optional(),
+  minutesPerBayCorner: z.number().optional(),
 });
 
 export const priceBookSummarySchema = z.object({

@@ -1,3 +1,4 @@
+import { KIND_RATES } from "./kind-rates";
 import { KIND_LABELS, type MaterialKind } from "./kinds";
 import { sameLength, sizeText, stockLengthText } from "./length-text";
 import { formatMoney, percentText } from "./numbers";
@@ -19,6 +20,7 @@ export const FIELD_LABELS: Record<string, string> = {
   minutesPictureFrame: "minutes per picture-frame opening",
   minutesPerExtensionFoot: "minutes per foot of extension",
   hourlyRate: "hourly rate",
+  ...Object.fromEntries(KIND_RATES.map((r) => [r.key, r.log])),
   markup: "markup",
   taxRate: "tax rate",
   taxLabour: "tax labour",

@@ -1,4 +1,5 @@
 import type { LabourRates } from "@/takeoff";
+import { KIND_RATES } from "./kind-rates";
 import { sameLength } from "./length-text";
 import type { FieldDiff, ItemFields, StockPrice } from "./types";
 
@@ -51,6 +52,7 @@ export function flattenBook(b: BookFields): Record<string, string | number | boo
     minutesPictureFrame: b.labour.minutesPerOpening["picture-frame"],
     minutesPerExtensionFoot: b.labour.minutesPerExtensionFoot,
     hourlyRate: b.labour.hourlyRate,
+    ...Object.fromEntries(KIND_RATES.flatMap((r) => (b.labour[r.key] === undefined ? [] : [[r.key, b.labour[r.key]!]]))),
     markup: b.markup,
     taxRate: b.taxRate,
     taxLabour: b.taxLabour,

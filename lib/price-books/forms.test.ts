@@ -18,11 +18,21 @@ describe("the rates form", () => {
     expect(ratesDraft(book)).toMatchObject({ markup: "15", taxRate: "8.25", hourlyRate: "58.00", stoolAndApron: "45" });
   });
 
+  it("sends a typed per-kind rate as minutes and shows an unset one blank", () => {
+    expect(ratesDraft(book)).toMatchObject({ doorSide: "", mull: "", arch: "", bayCorner: "" });
+    const plan = planRates(book, { ...ratesDraft(book), doorSide: "35", arch: "90" });
+    expect(plan).toMatchObject({ kind: "send", body: { labour: { minutesPerDoorSide: "35", minutesArchPremium: "90" } } });
+    expect(ratesDraft({ ...book, labour: { ...book.labour, minutesPerDoorSide: 35 } }).doorSide).toBe("35");
+  });
+
   it.each([
     ["nothing changed", {}, { kind: "unchanged" }],
     ["a percentage typed with its sign", { taxRate: "9 %" }, { kind: "send", body: expect.objectContaining({ version: 4, taxRate: 0.09, markup: 0.15 }) }],
     ["a bad markup and a bad rate", { markup: "lots", hourlyRate: "58.555" }, { kind: "invalid", fields: { markup: "Markup: write a number such as 45.", hourlyRate: "Hourly rate must be in dollars and cents (at most 2 decimals)." } }],
     ["an empty name", { name: " " }, { kind: "invalid", fields: { name: "Price book name is required." } }],
+    // Per-kind rates: typed ones are sent, blank ones left out (not set), bad ones refused on their own field.
+    ["a door-side rate typed, the others blank", { doorSide: "35" }, { kind: "send", body: expect.objectContaining({ labour: expect.not.objectContaining({ minutesPerMull: expect.anything() }) }) }],
+    ["a negative mull rate", { mull: "-2" }, { kind: "invalid", fields: { mull: "Minutes per mull must be zero or more." } }],
   ])("%s", (_, change, plan) => {
     expect(planRates(book, { ...ratesDraft(book), ...change })).toEqual(plan);
   });

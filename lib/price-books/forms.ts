@@ -1,6 +1,7 @@
 import { fieldErrorsOf } from "@/lib/plans/window-list/field-errors";
 import { priceBookItemCreateSchema, priceBookUpdateSchema } from "@/lib/validators/price-books";
 import { bookDiff } from "./diff";
+import { KIND_RATES, type KindRateDraftKey } from "./kind-rates";
 import type { MaterialKind } from "./kinds";
 import { moneyText, percentText, readPercent } from "./numbers";
 import type { PriceBookSummary } from "./types";
@@ -10,7 +11,7 @@ import type { PriceBookSummary } from "./types";
  * sent) and a new item (stock as rows of length and price). Each is checked with the API's schema
  * before it is sent, and messages are keyed by the form's own fields.
  */
-export interface RatesDraft {
+export type RatesDraft = Record<KindRateDraftKey, string> & {
   name: string;
   stoolAndApron: string;
   pictureFrame: string;
@@ -19,7 +20,7 @@ export interface RatesDraft {
   markup: string;
   taxRate: string;
   taxLabour: boolean;
-}
+};
 
 export const ratesDraft = (b: PriceBookSummary): RatesDraft => ({
   name: b.name,
@@ -30,6 +31,7 @@ export const ratesDraft = (b: PriceBookSummary): RatesDraft => ({
   markup: percentText(b.markup),
   taxRate: percentText(b.taxRate),
   taxLabour: b.taxLabour,
+  ...(Object.fromEntries(KIND_RATES.map((r) => [r.draft, b.labour[r.key] === undefined ? "" : String(b.labour[r.key])])) as Record<KindRateDraftKey, string>),
 });
 
 const RATE_FIELD: Record<string, keyof RatesDraft> = {
@@ -37,6 +39,7 @@ const RATE_FIELD: Record<string, keyof RatesDraft> = {
   "labour.minutesPerOpening.picture-frame": "pictureFrame",
   "labour.minutesPerExtensionFoot": "extensionFoot",
   "labour.hourlyRate": "hourlyRate",
+  ...Object.fromEntries(KIND_RATES.map((r) => [`labour.${r.key}`, r.draft])),
 };
 
 export type FormPlan<B> = { kind: "invalid"; fields: Record<string, string> } | { kind: "unchanged" } | { kind: "send"; body: B };
@@ -57,6 +60,8 @@ export function planRates(book: PriceBookSummary, d: RatesDraft): FormPlan<Recor
       minutesPerOpening: { "stool-and-apron": d.stoolAndApron, "picture-frame": d.pictureFrame },
       minutesPerExtensionFoot: d.extensionFoot,
       hourlyRate: d.hourlyRate,
+      // A blank per-kind rate is left out: not set.
+      ...Object.fromEntries(KIND_RATES.filter((r) => d[r.draft].trim() !== "").map((r) => [r.key, d[r.draft]])),
     },
     markup: markup.ok ? markup.value : 0,
     taxRate: taxRate.ok ? taxRate.value : 0,

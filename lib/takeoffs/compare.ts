@@ -1,4 +1,5 @@
 import { formatLength, formatLengthExact, MATERIALS, type Material } from "@/takeoff";
+import { KIND_RATES } from "@/lib/price-books/kind-rates";
 import type { TakeoffInputs, TakeoffPrices, TakeoffResult } from "@/takeoff";
 import { usd } from "./format";
 
@@ -94,6 +95,10 @@ export function explainDifferences(base: ComparedTakeoff, other: ComparedTakeoff
     if (la.minutesPerOpening[style] !== lb.minutesPerOpening[style]) out.push(`Minutes per ${style} opening: ${la.minutesPerOpening[style]} → ${lb.minutesPerOpening[style]}.`);
   }
   if (la.minutesPerExtensionFoot !== lb.minutesPerExtensionFoot) out.push(`Minutes per foot of extension: ${la.minutesPerExtensionFoot} → ${lb.minutesPerExtensionFoot}.`);
+  for (const r of KIND_RATES) {
+    const [x, y] = [la[r.key], lb[r.key]];
+    if (x !== y) out.push(`${r.log.charAt(0).toUpperCase()}${r.log.slice(1)}: ${x ?? "not set"} → ${y ?? "not set"}.`);
+  }
   if (base.prices.markup !== other.prices.markup) out.push(`Markup: ${pct(base.prices.markup)} → ${pct(other.prices.markup)}.`);
   if (base.prices.taxRate !== other.prices.taxRate) out.push(`Tax: ${pct(base.prices.taxRate)} → ${pct(other.prices.taxRate)}.`);
   const sa = base.inputs.settings;

@@ -43,6 +43,11 @@ export const labourSchema = z
       .strict(),
     minutesPerExtensionFoot: decimal("Minutes per foot of extension", 600, 2),
     hourlyRate: money("Hourly rate", 10_000),
+    // Per opening kind; absent = not set (see takeoff/pricing.ts for what that means).
+    minutesPerDoorSide: decimal("Minutes per door side", 1440, 2).optional(),
+    minutesPerMull: decimal("Minutes per mull", 1440, 2).optional(),
+    minutesArchPremium: decimal("Minutes added for an arched head", 1440, 2).optional(),
+    minutesPerBayCorner: decimal("Minutes per bay corner", 1440, 2).optional(),
   })
   .strict();
 export type LabourInput = z.infer<typeof labourSchema>;

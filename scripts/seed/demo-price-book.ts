@@ -56,7 +56,7 @@ async function createDemoPriceBook(orgId: string, userId: string): Promise<strin
     userId,
     input: {
       name: DEMO_PRICE_BOOK_NAME,
-      labour: { minutesPerOpening: { "stool-and-apron": 45, "picture-frame": 30 }, minutesPerExtensionFoot: 2, hourlyRate: 58 },
+      labour: { minutesPerOpening: { "stool-and-apron": 45, "picture-frame": 30 }, minutesPerExtensionFoot: 2, hourlyRate: 58, minutesPerDoorSide: 25, minutesPerMull: 15, minutesArchPremium: 60, minutesPerBayCorner: 20 },
       markup: 0.15,
       taxRate: 0.0825,
       taxLabour: false,

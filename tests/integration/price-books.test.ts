@@ -91,6 +91,22 @@ describe("editing a price book", () => {
     expect(await snapshot()).toBe(before);
   });
 
+  it("keeps labour rates per opening kind, logs them by name, and refuses a negative one on its field", async () => {
+    const w = await makeOrg("Sorrel");
+    const api = await asSecondAdmin(w);
+    const labour = { minutesPerOpening: { "stool-and-apron": 45, "picture-frame": 30 }, minutesPerExtensionFoot: 2, hourlyRate: 58 };
+    const before = await snapshot();
+    const bad = await api.patchBook({ version: 1, labour: { ...labour, minutesPerMull: -1 } });
+    expect(bad.status).toBe(422);
+    expect(bad.json.fields).toEqual({ "labour.minutesPerMull": "Minutes per mull must be zero or more." });
+    expect(await snapshot()).toBe(before);
+    const ok = await api.patchBook({ version: 1, labour: { ...labour, minutesPerDoorSide: 25, minutesArchPremium: "60" } });
+    expect(ok.status).toBe(200);
+    expect(ok.json.priceBook.labour).toEqual({ ...labour, minutesPerDoorSide: 25, minutesArchPremium: 60 });
+    const [change] = await api.changes();
+    expect(change!.summary).toMatch(/minutes per door side/);
+  });
+
   it("refuses a second book of the same name, whatever its case", async () => {
     const w = await makeOrg("Sorrel");
     const api = await asSecondAdmin(w);

@@ -12,6 +12,7 @@ export const settingsSchema = z.object({
   /** null: rips take the saw kerf. */
   ripKerf: z.number().nullable(),
   planSeconds: z.number(),
+  scarfOverlap: z.number(),
 });
 export type ClientSettings = z.infer<typeof settingsSchema>;
 

@@ -29,6 +29,15 @@ export const settingsSchema = z
       .optional(),
     /** The rip cut between strips of one board; null (or blank) = the saw kerf. */
     ripKerf: z.preprocess(blankToNull, kerfLimit("Rip kerf").nullable()).optional(),
+    /** What each scarf joint takes up; null (or blank) = the default. */
+    scarfOverlap: z
+      .preprocess(
+        blankToNull,
+        lengthInput("Scarf overlap", { allowZero: true, example: "1, 3/4 or 20 mm" })
+          .refine((v) => v <= 12, "Scarf overlap must be at most 12 in.")
+          .nullable(),
+      )
+      .optional(),
     /** Seconds a run may spend planning its board orders; null (or blank) = the default. */
     planSeconds: z
       .preprocess(

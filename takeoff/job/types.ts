@@ -19,6 +19,11 @@ export interface TakeoffSettings {
    * engine's default (DEFAULT_RUN_PLAN_SECONDS). When it ends, orders carry the best plan found so far.
    */
   planSeconds?: number;
+  /**
+   * Length each scarf joint takes up where a piece is longer than every stock length and is spliced from
+   * two or more boards; absent = not set (takeoffs saved before splicing: such pieces were refused).
+   */
+  scarfOverlap?: number;
 }
 
 export type OpeningKindName = OpeningKind;

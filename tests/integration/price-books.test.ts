@@ -102,7 +102,7 @@ describe("editing a price book", () => {
     expect(await snapshot()).toBe(before);
     const ok = await api.patchBook({ version: 1, labour: { ...labour, minutesPerDoorSide: 25, minutesArchPremium: "60" } });
     expect(ok.status).toBe(200);
-    expect(ok.json.priceBook.labour).toEqual({ ...labour, minutesPerDoorSide: 25, minutesArchPremium: 60 });
+    expect((ok.json.priceBook as { labour: unknown }).labour).toEqual({ ...labour, minutesPerDoorSide: 25, minutesArchPremium: 60 });
     const [change] = await api.changes();
     expect(change!.summary).toMatch(/minutes per door side/);
   });

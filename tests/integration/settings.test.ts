@@ -77,7 +77,7 @@ describe("company settings", () => {
     const { priceBookId } = await addTestPriceBook(home.org.id);
     const run = await call(takeoffsRoute.POST, { method: "POST", path: "/x", params, body: { name: "With our settings", priceBookId }, cookie });
     // No rip kerf set: the engine rips with the saw kerf; the time limit is the default, written down.
-    expect((run.json.takeoff as TakeoffView).inputs.settings).toEqual({ kerf: 3 / 32, wastePercent: 5, planSeconds: 2 });
+    expect((run.json.takeoff as TakeoffView).inputs.settings).toEqual({ kerf: 3 / 32, wastePercent: 5, planSeconds: 2, scarfOverlap: 1 });
   });
 });
 
@@ -140,6 +140,39 @@ describe("rip kerf and board-order time limit", () => {
     const { priceBookId } = await addTestPriceBook(home.org.id);
     const run = await call(takeoffsRoute.POST, { method: "POST", path: "/x", params, body: { name: "Ripped", priceBookId }, cookie });
     expect(run.status).toBe(201);
-    expect((run.json.takeoff as TakeoffView).inputs.settings).toEqual({ kerf: 1 / 8, wastePercent: 10, ripKerf: 5 / 32, planSeconds: 0.5 });
+    expect((run.json.takeoff as TakeoffView).inputs.settings).toEqual({ kerf: 1 / 8, wastePercent: 10, ripKerf: 5 / 32, planSeconds: 0.5, scarfOverlap: 1 });
+  });
+});
+
+describe("scarf overlap", () => {
+  const read = async () =>
+    (await call(settingsRoute.GET, { method: "GET", path: "/x", params: { orgSlug: home.org.slug }, cookie: await cookieOf("admin") })).json.settings as { scarfOverlap: number };
+
+  it("is 1 in until set, is kept when set, and blank goes back to 1 in", async () => {
+    expect((await patch({ scarfOverlap: null })).status).toBe(200);
+    expect((await read()).scarfOverlap).toBe(1);
+    expect((await patch({ scarfOverlap: "1 1/2" })).status).toBe(200);
+    expect((await read()).scarfOverlap).toBe(1.5);
+    expect((await patch({ wastePercent: 10 })).status).toBe(200);
+    expect((await read()).scarfOverlap).toBe(1.5);
+    expect((await patch({ scarfOverlap: "" })).status).toBe(200);
+    expect((await read()).scarfOverlap).toBe(1);
+  });
+
+  it.each([
+    [{ scarfOverlap: "long" }, /Scarf overlap: write a length such as 1, 3\/4 or 20 mm/],
+    [{ scarfOverlap: "13" }, /at most 12 in/],
+  ])("refuses %j on its field, changing nothing", async (body, message) => {
+    const before = await snapshot();
+    const res = await patch(body);
+    expect(res.status).toBe(422);
+    expect(res.json.fields?.scarfOverlap).toMatch(message);
+    expect(await snapshot()).toBe(before);
+  });
+
+  it("an estimator cannot change it", async () => {
+    const before = await snapshot();
+    expect((await patch({ scarfOverlap: "2" }, "estimator")).status).toBe(403);
+    expect(await snapshot()).toBe(before);
   });
 });

@@ -20,6 +20,7 @@ export async function snapshotInputs(s: ProjectScope, casingItemId: string | nul
       wastePercent: settings.wastePercent,
       ...(settings.ripKerf !== null ? { ripKerf: settings.ripKerf } : {}),
       planSeconds: settings.planSeconds,
+      scarfOverlap: settings.scarfOverlap,
     },
     casingItemId,
     ...(allowPlaceholders ? { allowPlaceholders: true } : {}),

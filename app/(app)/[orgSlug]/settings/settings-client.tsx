@@ -28,6 +28,7 @@ const FIELD_NAMES: Record<string, string> = {
   wastePercent: "Waste allowance",
   ripKerf: "Rip kerf",
   planSeconds: "Board-order time limit",
+  scarfOverlap: "Scarf overlap",
   _: "Settings",
 };
 
@@ -63,6 +64,7 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
     }
     const kerfText = form.kerf?.trim() ?? "";
     const ripText = form.ripKerf?.trim() ?? "";
+    const scarfText = form.scarfOverlap?.trim() ?? "";
     const body = {
       trimDefaults: spec,
       kerf: kerfText === len(stored.kerf) ? stored.kerf : kerfText,
@@ -70,6 +72,8 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
       // Blank: rips take the saw kerf (sent as null, which clears a rip kerf set before).
       ripKerf: ripText === "" ? null : ripText === len(stored.ripKerf ?? undefined) ? stored.ripKerf : ripText,
       planSeconds: form.planSeconds,
+      // Blank: back to the default overlap.
+      scarfOverlap: scarfText === "" ? null : scarfText === len(stored.scarfOverlap) ? stored.scarfOverlap : scarfText,
     };
     // The API's own schema over the whole form, so every wrong field is named at once, not the first.
     const checked = settingsSchema.safeParse(body);
@@ -131,6 +135,14 @@ export function SettingsForm({ orgSlug, initial, canWrite }: { orgSlug: string; 
                 hint={`How long a takeoff may search for the cheapest board orders, ${PLAN_SECONDS.min} to ${PLAN_SECONDS.max} s (default ${PLAN_SECONDS.default}). On large jobs a longer limit can find cheaper orders; each run takes up to this long.`}
               >
                 <TextInput name="planSeconds" inputMode="decimal" defaultValue={String(initial.planSeconds)} error={errors.planSeconds} />
+              </Field>
+              <Field
+                label="Scarf overlap"
+                name="scarfOverlap"
+                error={errors.scarfOverlap}
+                hint="A piece longer than every stock length is spliced from two boards with a scarf joint; each joint takes this much extra length. Blank: 1."
+              >
+                <TextInput name="scarfOverlap" defaultValue={len(initial.scarfOverlap)} error={errors.scarfOverlap} />
               </Field>
             </div>
           </Card>

@@ -70,7 +70,11 @@ export async function orderBoards(lines: readonly PricedLine[], opts: OrderOptio
     ...g,
     widths: [...g.byWidth.entries()].sort((a, b) => (b[0] ?? 0) - (a[0] ?? 0)).map(([width, m]) => ({ width, demand: demandOf(m) })),
   }));
-  budget.expect(planned.reduce((t, g) => t + g.widths.reduce((u, w) => u + pieceCount(w.demand), 0), 0));
+  // Weights: the pieces each crosscut plan cuts, and for an order of several widths its rip step, which
+  // packs its strips — announced as the order's pieces, since no strip carries fewer than one piece.
+  const piecesOf = (g: (typeof planned)[number]) => g.widths.reduce((t, w) => t + pieceCount(w.demand), 0);
+  const ripWeight = (g: (typeof planned)[number]) => (g.widths.length > 1 ? piecesOf(g) : 0);
+  budget.expect(planned.reduce((t, g) => t + piecesOf(g) + ripWeight(g), 0));
 
   const orders: BoardOrder[] = [];
   for (const g of planned) {
@@ -87,7 +91,7 @@ export async function orderBoards(lines: readonly PricedLine[], opts: OrderOptio
     const ripped = widths.length > 1 || (widths.length === 1 && stripsPerBoard(g.item.faceWidth, widths[0]!, ripKerf) > 1);
     let plan = withProof(perWidth[0]!.plan);
     let rip: RipPlan | undefined;
-    if (ripped) ({ plan, rip } = await ripOrder(perWidth as WidthPlan[], g.item, ripKerf, budget));
+    if (ripped) ({ plan, rip } = await ripOrder(perWidth as WidthPlan[], g.item, ripKerf, { plan: budget, weight: ripWeight(g) }));
     const perLength = new Map<number, number>();
     if (rip) for (const b of rip.boards) perLength.set(b.stockLength, b.boards);
     else for (const b of plan.boards) perLength.set(b.stockLength, (perLength.get(b.stockLength) ?? 0) + b.count);

@@ -17,7 +17,8 @@ const floorCents = (f: Fraction) => new Fraction(floorDiv(100n * numer(f), f.d),
  * Turns the strip plans of an order's widths into what the yard sells. The crosscuts are planned per
  * width along strips (a strip is as long as its board); then, per stock length, the strips of every width
  * are packed across the boards' face with the rip kerf between them (packStrips). Strips of two lengths
- * never share a board. Money is exact: cost is boards × price per length.
+ * never share a board. Money is exact: cost is boards × price per length. `budget.weight` is what the
+ * order announced to the run's budget for this step (see orderBoards).
  *
  * The widths' strips are planned apart and then packed, so the plan is not proven best over every way
  * of choosing lengths and rips together; its cost bound is (see rippedBound), and the plan is "optimal"
@@ -31,7 +32,7 @@ export async function ripOrder(
   perWidth: readonly WidthPlan[],
   item: PriceItemSnapshot,
   kerf: number,
-  budget: PlanBudget,
+  budget: { plan: PlanBudget; weight: number },
 ): Promise<{ plan: StockPlan; rip: RipPlan }> {
   const board = item.faceWidth;
   const atLength = new Map<number, Map<number, number>>();
@@ -45,10 +46,12 @@ export async function ripOrder(
   const layouts: RipLayout[] = [];
   const boards: RipPlan["boards"] = [];
   let budgetSpent = perWidth.some((p) => p.plan.budgetSpent === true);
+  const allStrips = perWidth.reduce((t, p) => t + p.plan.boards.reduce((u, b) => u + b.count, 0), 0);
   for (const [stockLength, counts] of [...atLength].sort((a, b) => b[0] - a[0])) {
     const wanted = [...counts].map(([width, count]) => ({ width, count })).sort((a, b) => b.width - a.width);
     const strips = wanted.reduce((t, s) => t + s.count, 0);
-    const packed = await packStrips(wanted, board, kerf, budget.share(strips, false));
+    // The weight announced for the rip step is shared over the stock lengths by their strips.
+    const packed = await packStrips(wanted, board, kerf, budget.plan.share((budget.weight * strips) / allStrips));
     budgetSpent ||= packed.budgetSpent;
     const mine = packed.layouts
       .map((l) => ({ stockLength, ...l }))

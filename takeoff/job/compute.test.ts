@@ -62,7 +62,7 @@ describe("computeTakeoff", () => {
     }
     const slow = await computeTakeoff(testInputs({ settings: { kerf: 0.125, wastePercent: 10, planSeconds: 30 } }), testPrices());
     expect(slow.planning!.budgetSeconds).toBe(30);
-  });
+  }, 30_000);
 
   it("adds the waste allowance on each item's board count, rounded up, at its longest length; prices the bid from what is bought", async () => {
     const result = await computeTakeoff(testInputs(), testPrices());

@@ -2,6 +2,7 @@ import { ceilToMultiple, exact, floorDiv, Fraction, gcdFractions, numer, sumFrac
 import type { StockPlan } from "../types";
 import type { PlanBudget } from "./plan-budget";
 import { fullestRip, packStrips, spareStrips, stripsPerBoard } from "./rip";
+import { layoutBound } from "./rip-bound";
 import type { PriceItemSnapshot, RipLayout, RipPlan } from "./types";
 
 /** planStock's plan of one strip width: every strip a stock piece of its board's length at the board's price. */
@@ -93,6 +94,8 @@ export async function ripOrder(
  *   of its board, and the strips of width w cost at least their own proven bound at board price
  *   (planStock's lowerBound): Σ over widths of bound × (w + k)/C;
  * - a board holds at most n_w strips of width w, so the boards carrying them cost at least bound / n_w;
+ * - the best dual-feasible weighting of the widths (layoutBound), which is at least as strong as both
+ *   above when the face's grid is small enough to search;
  * - every plan costs a whole number of board prices, so a multiple of their gcd: the larger bound is
  *   rounded up to one, then down to the cent (a bound stays a bound when shown to the cent).
  * One width: C = n(w + k), so both are the strip bound / n. A strip wider than the board takes all of it.
@@ -109,6 +112,13 @@ export function rippedBound(perWidth: readonly WidthPlan[], item: PriceItemSnaps
   const bound = (p: WidthPlan) => exact(p.plan.lowerBound.cost);
   const shared = sumFractions(perWidth.map((p) => bound(p).mul(wide(p.width) ? 1 : exact(p.width).add(k).div(fullest))));
   const alone = perWidth.map((p) => bound(p).div(wide(p.width) ? 1 : stripsPerBoard(board, p.width, kerf)));
-  const best = alone.reduce((m, b) => (b.gt(m) ? b : m), shared);
+  const layouts = layoutBound(
+    perWidth.map((p) => ({ width: p.width, bound: bound(p) })),
+    board,
+    kerf,
+  );
+  const wholeBoards = sumFractions(perWidth.filter((p) => wide(p.width)).map(bound));
+  const candidates = [...alone, ...(layouts ? [layouts.add(wholeBoards)] : [])];
+  const best = candidates.reduce((m, b) => (b.gt(m) ? b : m), shared);
   return floorCents(ceilToMultiple(best, gcdFractions(item.stock.map((s) => exact(s.price)))));
 }

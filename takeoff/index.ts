@@ -58,7 +58,8 @@ export {
 } from "./schemas";
 
 // A whole job from its snapshots: what a takeoff run executes and what a saved takeoff stores.
-export { computeTakeoff } from "./job/compute";
+export { computeTakeoff, type RunOptions } from "./job/compute";
+export { DEFAULT_RUN_PLAN_SECONDS } from "./job/plan-budget";
 export { materialCost } from "./job/materials";
 export { MissingItem, OpeningTypeProblem, PriceGaps } from "./job/errors";
 export { assessOpeningType, type Assessment, type OpeningTypeInput, type PriceGap } from "./job/price-gaps";
@@ -68,6 +69,7 @@ export type {
   MaterialSummary,
   OpeningTypeResult,
   PlaceholderLine,
+  PlanningSummary,
   PriceItemSnapshot,
   RipLayout,
   RipPlan,

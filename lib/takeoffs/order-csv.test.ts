@@ -31,7 +31,8 @@ it("gives a ripped order's planned boards, not its strips", async () => {
     for (const b of o.rip!.boards) {
       const row = rows.find((r) => r[0] === o.material && r[1] === o.itemName && r[4] && Number(r[5]) === b.boards);
       expect(row, `${o.itemName} ${b.stockLength}`).toBeDefined();
-      expect(b.boards).toBe(Math.ceil(b.strips / o.rip!.stripsPerBoard));
+      // Boards per length are the boards the layouts rip (strips of several widths may share one).
+      expect(b.boards).toBe(o.rip!.layouts!.filter((l) => l.stockLength === b.stockLength).reduce((t, l) => t + l.count, 0));
     }
   }
 });

@@ -4,6 +4,9 @@ import { testInputs, testPrices } from "../testing/job-fixtures";
 import { openingOf } from "./opening-of";
 import { computeTakeoff } from "./compute";
 import { MissingItem } from "./errors";
+import { DEFAULT_RUN_PLAN_SECONDS } from "./plan-budget";
+import { checkRipped } from "./ripped-check";
+import type { Demand } from "../types";
 
 describe("computeTakeoff", () => {
   it("worked example, JLC 'Production Jamb Extensions': 3 1/2 in casing with 1/4 in reveals at jamb and stool → stool 8 in longer than the jamb opening", async () => {
@@ -28,19 +31,39 @@ describe("computeTakeoff", () => {
       const q = inputs.counts.job[ot.id]!;
       for (const piece of cutList(openingOf(ot), ot.trimSpec)) {
         const item = result.openingTypes.find((o) => o.openingTypeId === ot.id)!.items[piece.material]!;
-        const order = result.orders.find((o) => o.itemId === item && o.material === piece.material && (o.width ?? null) === (piece.material === "extension" ? piece.width : null));
-        const cut = order!.plan.boards.flatMap((b) => Array<number[]>(b.count).fill(b.cuts)).flat().filter((c) => c === piece.length).length;
+        // Extensions of every width from one item share one order; their crosscuts are per strip width.
+        const order = result.orders.find((o) => o.itemId === item && o.material === piece.material);
+        const along = order!.plan.boards.filter((b) => piece.material !== "extension" || b.width === piece.width);
+        const cut = along.flatMap((b) => Array<number[]>(b.count).fill(b.cuts)).flat().filter((c) => c === piece.length).length;
         expect(cut).toBeGreaterThanOrEqual(piece.quantity * q);
       }
     }
     const extensions = result.orders.filter((o) => o.material === "extension");
-    expect(extensions.map((o) => [o.width, o.stockWidth]).sort()).toEqual([
-      [0.5, 3.5],
-      [1.4375, 3.5],
-    ]);
+    expect(extensions.map((o) => [o.widths, o.stockWidth])).toEqual([[[1.4375, 0.5], 3.5]]);
     // Aprons come from the casing when the book lists no apron of that profile (common practice).
     expect(result.orders.find((o) => o.material === "apron")!.itemId).toBe("casing-25");
   });
+
+  it("extensions of both widths share the 1x4 boards they are cut from; rips take settings.ripKerf, crosscuts settings.kerf", async () => {
+    for (const ripKerf of [undefined, 0.1875]) {
+      const inputs = testInputs();
+      if (ripKerf !== undefined) inputs.settings.ripKerf = ripKerf;
+      const result = await computeTakeoff(inputs, testPrices());
+      const demand = new Map<number, Demand[]>();
+      for (const ot of inputs.openingTypes) {
+        for (const p of cutList(ot, ot.trimSpec).filter((c) => c.material === "extension")) {
+          demand.set(p.width!, [...(demand.get(p.width!) ?? []), { length: p.length, quantity: p.quantity * inputs.counts.job[ot.id]! }]);
+        }
+      }
+      const order = result.orders.find((o) => o.material === "extension")!;
+      checkRipped(order, demand, testPrices().items.find((i) => i.id === "ext-35")!.stock, 0.125, ripKerf ?? 0.125);
+      // Narrowest width 1/2": floor((3.5 + k) / (0.5 + k)) strips a board — 5 at 1/8", 5 at 3/16" (derived).
+      expect(order.rip!.stripsPerBoard).toBe(5);
+      expect(result.planning).toEqual({ budgetSeconds: DEFAULT_RUN_PLAN_SECONDS, allOptimal: result.orders.every((o) => o.plan.proof === "optimal"), bestFound: result.orders.filter((o) => o.plan.proof === "best-found").length, budgetSpent: 0 });
+    }
+    const slow = await computeTakeoff(testInputs({ settings: { kerf: 0.125, wastePercent: 10, planSeconds: 30 } }), testPrices());
+    expect(slow.planning!.budgetSeconds).toBe(30);
+  }, 30_000);
 
   it("adds the waste allowance on each item's board count, rounded up, at its longest length; prices the bid from what is bought", async () => {
     const result = await computeTakeoff(testInputs(), testPrices());

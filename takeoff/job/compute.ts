@@ -5,6 +5,7 @@ import type { CutPiece, Material, TakeoffLine, TrimSpec } from "../types";
 import { orderBoards } from "./board-orders";
 import { MissingItem, OpeningTypeProblem, PriceGaps } from "./errors";
 import { materialCost, summarizeMaterials } from "./materials";
+import { PlanBudget, planningSummary, runPlanSeconds } from "./plan-budget";
 import { assessOpeningType, placeholderFor, placeholdersFor, type PriceGap } from "./price-gaps";
 import type { OpeningTypeResult, PriceItemSnapshot, TakeoffInputs, TakeoffPrices, TakeoffResult } from "./types";
 
@@ -19,14 +20,25 @@ interface Planned {
   gaps: PriceGap[];
 }
 
+/** How a run is watched; the engine needs none of it. */
+export interface RunOptions {
+  /** Millisecond clock for the planning budget; default performance.now. */
+  now?: () => number;
+  /** Told the wall-clock milliseconds spent planning board orders (benchmarks report it). */
+  onPlanned?: (ms: number) => void;
+}
+
 /**
  * A whole takeoff from its snapshots: cut lists per opening type, totals per unit type and for the job,
- * board orders per price-book item (extensions per rip width), waste allowance, labour and the bid.
- * Pure: everything it needs is in `inputs` and `prices`, which is what makes a saved takeoff reproducible.
+ * board orders per price-book item (extensions of every rip width together), waste allowance, labour and
+ * the bid. Everything it needs is in `inputs` and `prices`, which is what makes a saved takeoff
+ * reproducible — except time: planning shares `settings.planSeconds` over the orders, and an order whose
+ * share runs out keeps the best plan found (result.planning says whether any did). Crosscuts take
+ * `settings.kerf`, rips `settings.ripKerf` (absent: the same kerf).
  * Refuses, naming the opening type, a window that cannot be cut; refuses a price-book gap unless
  * `inputs.allowPlaceholders`, in which case the gap is priced with a named placeholder.
  */
-export async function computeTakeoff(inputs: TakeoffInputs, prices: TakeoffPrices): Promise<TakeoffResult> {
+export async function computeTakeoff(inputs: TakeoffInputs, prices: TakeoffPrices, run: RunOptions = {}): Promise<TakeoffResult> {
   const override = inputs.casingItemId ? (prices.items.find((i) => i.id === inputs.casingItemId) ?? null) : null;
   if (inputs.casingItemId && !override) throw new MissingItem("The alternate casing is not in the price book.");
   const { kerf, wastePercent } = inputs.settings;
@@ -58,7 +70,12 @@ export async function computeTakeoff(inputs: TakeoffInputs, prices: TakeoffPrice
   const inJob = planned.filter((p) => p.quantity > 0);
   const lines: (TakeoffLine & { id: string })[] = inJob.map((p) => ({ id: p.id, opening: p.opening, spec: p.spec, quantity: p.quantity }));
   const isPlaceholder = new Set([...placeholders.values()].map((ph) => ph.item.id));
-  const orders = await orderBoards(inJob, { kerf, wastePercent, placeholders: isPlaceholder });
+  const now = run.now ?? (() => performance.now());
+  const budget = new PlanBudget(runPlanSeconds(inputs.settings.planSeconds), now);
+  const planStart = now();
+  const ripKerf = inputs.settings.ripKerf ?? kerf;
+  const orders = await orderBoards(inJob, { kerf, ripKerf, wastePercent, placeholders: isPlaceholder, budget });
+  run.onPlanned?.(now() - planStart);
 
   const totalsFor = (count: (otId: string) => number) =>
     takeoffTotals(lines.map((l) => ({ ...l, quantity: count(l.id) })).filter((l) => l.quantity > 0));
@@ -82,6 +99,7 @@ export async function computeTakeoff(inputs: TakeoffInputs, prices: TakeoffPrice
     materials: summarizeMaterials(orders),
     labourMinutes: lines.length ? labourMinutes(lines, prices.labour) : 0,
     bid: bidTotal({ material: materialCost(orders), labour }, { markup: prices.markup, taxRate: prices.taxRate, taxLabour: prices.taxLabour }),
+    planning: planningSummary(orders, budget.seconds),
   };
   if (placeholders.size > 0) {
     result.placeholders = [...placeholders.values()].map((ph) => {

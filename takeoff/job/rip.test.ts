@@ -25,7 +25,15 @@ describe("strips ripped from one board", () => {
     // By hand: a 96" strip takes three 30" cuts with kerf (3 × 30.125 = 90.375 ≤ 96), so 12 pieces need
     // 4 strips; four strips per board → ceil(4 / 4) = 1 board, where one strip per board bought 4.
     const [o] = await orderBoards([{ quantity: 1, pieces: [piece(30, 12, 0.75)], items: { extension: board([{ length: 96, price: 9.6 }]) } }], opts);
-    expect(o!.rip).toEqual({ stripsPerBoard: 4, strips: 4, offcutStrips: 0, boards: [{ stockLength: 96, strips: 4, boards: 1 }] });
+    expect(o!.rip).toEqual({
+      stripsPerBoard: 4,
+      strips: 4,
+      offcutStrips: 0,
+      boards: [{ stockLength: 96, strips: 4, boards: 1 }],
+      // 3.5 − 4 × 0.75 − 3 × 0.125 = 0.125 of board left (derived).
+      layouts: [{ stockLength: 96, count: 1, strips: [0.75, 0.75, 0.75, 0.75], offcutWidth: 0.125 }],
+    });
+    expect(o!.plan.boards).toEqual([{ stockLength: 96, count: 4, cuts: [30, 30, 30], offcut: 5.625, width: 0.75 }]);
     expect(o!.plan.boardCount).toBe(1);
     expect(o!.toBuy).toEqual([{ stockLength: 96, count: 1, price: 9.6 }]);
     expect(o!.plan.cost).toBe(9.6);
@@ -39,6 +47,12 @@ describe("strips ripped from one board", () => {
       { ...opts, wastePercent: 10 },
     );
     expect(o!.rip).toMatchObject({ strips: 5, offcutStrips: 3, boards: [{ stockLength: 96, strips: 5, boards: 2 }] });
+    // The second board is ripped to the one strip it needs; its 3.5 − 0.75 = 2.75 left would rip three
+    // more (3 × 0.875 = 2.625 ≤ 2.75, derived): the 3 offcut strips.
+    expect(o!.rip!.layouts).toEqual([
+      { stockLength: 96, count: 1, strips: [0.75, 0.75, 0.75, 0.75], offcutWidth: 0.125 },
+      { stockLength: 96, count: 1, strips: [0.75], offcutWidth: 2.75 },
+    ]);
     expect(o!.plan.purchasedLength).toBe(8 * 96);
     expect(o!.toBuy).toEqual([{ stockLength: 96, count: 3, price: 9.6 }]);
   });

@@ -134,11 +134,17 @@ export interface BoardOrder {
 
 /** How a ripped order's boards are shared out as strips. */
 export interface RipPlan {
-  /** Strips of the order's width one board yields after the rip kerf. */
+  /**
+   * Strips of the order's width one board yields after the rip kerf; in an order of several widths
+   * (BoardOrder.widths), strips of its narrowest width.
+   */
   stripsPerBoard: number;
   /** Strips the plan cuts pieces from. */
   strips: number;
-  /** Strips bought but not used (boards × stripsPerBoard − strips); their length is offcut. */
+  /**
+   * Strips bought but not used, their length offcut: strips of the narrowest width still to be had from
+   * each board's offcut width. For one width that is boards × stripsPerBoard − strips.
+   */
   offcutStrips: number;
   /** Per stock length, longest first: strips used and boards bought for them (before the allowance). */
   boards: { stockLength: number; strips: number; boards: number }[];
@@ -203,4 +209,18 @@ export interface TakeoffResult {
   bid: Bid;
   /** Placeholders used; absent or empty when every item came from the price book. */
   placeholders?: PlaceholderLine[];
+  /** How planning the orders went; absent in takeoffs saved before the planning budget existed. */
+  planning?: PlanningSummary;
+}
+
+/** The run's planning budget and what came of it. */
+export interface PlanningSummary {
+  /** Seconds the run could spend planning its orders (TakeoffSettings.planSeconds or the default). */
+  budgetSeconds: number;
+  /** Every order's plan is proven optimal (its cost meets its proven lower bound). */
+  allOptimal: boolean;
+  /** Orders whose plan is the best found, above its bound (plan.proof "best-found"). */
+  bestFound: number;
+  /** Orders whose search the budget ended before it finished (plan.budgetSpent). */
+  budgetSpent: number;
 }

@@ -51,7 +51,7 @@ describe("computeTakeoff", () => {
       const result = await computeTakeoff(inputs, testPrices());
       const demand = new Map<number, Demand[]>();
       for (const ot of inputs.openingTypes) {
-        for (const p of cutList(ot, ot.trimSpec).filter((c) => c.material === "extension")) {
+        for (const p of cutList(openingOf(ot), ot.trimSpec).filter((c) => c.material === "extension")) {
           demand.set(p.width!, [...(demand.get(p.width!) ?? []), { length: p.length, quantity: p.quantity * inputs.counts.job[ot.id]! }]);
         }
       }

@@ -1,5 +1,6 @@
 import { describe, expect, it, vi } from "vitest";
 import type { CutPiece, Demand, PlanOptions, StockItem } from "../types";
+import type { PriceItemSnapshot } from "./types";
 
 // planStock is watched, not replaced: every call still plans, and the options it was given are kept.
 const calls: { pieces: number; opts: PlanOptions }[] = [];
@@ -57,7 +58,7 @@ describe("the run's planning budget", () => {
     const piece = (material: CutPiece["material"], quantity: number, width?: number): CutPiece => ({
       part: material === "extension" ? "extension-side" : "casing-leg", material, quantity, length: 30, ...(width ? { width } : {}), ends: ["square", "square"],
     });
-    const item = (id: string, kind: CutPiece["material"]) => ({
+    const item = (id: string, kind: PriceItemSnapshot["kind"]) => ({
       id, name: id, kind, faceWidth: 3.5, thickness: 0.75, species: null, supplierCode: null, stock: [{ length: 96, price: 9.6 }],
     });
     calls.length = 0;

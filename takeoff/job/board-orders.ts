@@ -52,9 +52,13 @@ export async function orderBoards(lines: readonly PricedLine[], opts: OrderOptio
   for (const line of lines) {
     if (line.quantity === 0) continue;
     for (const piece of line.pieces) {
+      // Curved pieces are not cut from straight stock: they are ordered by radius and count
+      // (TakeoffResult.job's curved totals), apart from the board orders.
+      if (piece.radius !== undefined) continue;
       const item = line.items[piece.material];
       if (!item) throw new Error(`${piece.material}: no price-book item picked for this piece`);
-      const width = piece.material === "extension" ? piece.width : undefined;
+      // Extensions and mullion casings are flat boards ripped to width.
+      const width = piece.material === "extension" || piece.material === "mullion" ? piece.width : undefined;
       // A piece of no width is planned as boards, apart from the ripped ones.
       const key = `${item.id}|${piece.material}|${width === undefined ? "" : "ripped"}`;
       const group = groups.get(key) ?? { item, material: piece.material, byWidth: new Map() };

@@ -1,7 +1,8 @@
 import { exact, roundToCents, toNumber } from "../exact";
 import { bidTotal, labourCost, labourMinutes } from "../pricing";
 import { takeoffTotals } from "../totals";
-import type { CutPiece, Material, TakeoffLine, TrimSpec } from "../types";
+import type { CutPiece, Material, Opening, TakeoffLine, TrimSpec } from "../types";
+import { openingOf } from "./opening-of";
 import { orderBoards } from "./board-orders";
 import { MissingItem, OpeningTypeProblem, PriceGaps } from "./errors";
 import { materialCost, summarizeMaterials } from "./materials";
@@ -14,10 +15,13 @@ interface Planned {
   mark: string;
   quantity: number;
   spec: TrimSpec;
-  opening: { width: number; height: number; setback: number };
+  opening: Opening;
   pieces: CutPiece[];
   items: Partial<Record<Material, PriceItemSnapshot>>;
   gaps: PriceGap[];
+  width: number;
+  height: number;
+  setback: number;
 }
 
 /** How a run is watched; the engine needs none of it. */
@@ -44,10 +48,11 @@ export async function computeTakeoff(inputs: TakeoffInputs, prices: TakeoffPrice
   const { kerf, wastePercent } = inputs.settings;
 
   const planned: Planned[] = inputs.openingTypes.map((ot) => {
-    const a = assessOpeningType(ot, prices, kerf, override);
+    const a = assessOpeningType(ot, prices, kerf, override, inputs.settings.scarfOverlap);
     if (!a.ok) throw new OpeningTypeProblem(ot.mark, a.problem.field, `${ot.mark}: ${a.problem.message}`);
-    const opening = { width: ot.width, height: ot.height, setback: ot.setback };
-    return { id: ot.id, mark: ot.mark, quantity: inputs.counts.job[ot.id] ?? 0, spec: a.spec, opening, pieces: a.pieces, items: a.picked, gaps: a.gaps };
+    const opening = openingOf(ot);
+    const size = { width: ot.width, height: ot.height, setback: ot.setback };
+    return { id: ot.id, mark: ot.mark, quantity: inputs.counts.job[ot.id] ?? 0, spec: a.spec, opening, ...size, pieces: a.pieces, items: a.picked, gaps: a.gaps };
   });
   // Only windows in the job need prices: an untagged type's gap does not stop the run.
   const gaps = planned.filter((p) => p.quantity > 0).flatMap((p) => p.gaps);
@@ -63,7 +68,8 @@ export async function computeTakeoff(inputs: TakeoffInputs, prices: TakeoffPrice
     mark: p.mark,
     quantity: p.quantity,
     spec: p.spec,
-    opening: p.opening,
+    opening: { width: p.width, height: p.height, setback: p.setback },
+    ...(p.opening.kind && p.opening.kind !== "window" ? { kindOpening: p.opening } : {}),
     cutList: p.pieces,
     items: Object.fromEntries(Object.entries(p.items).map(([m, i]) => [m, i!.id])),
   }));

@@ -33,7 +33,7 @@ export function findItems(
   items: PriceItemSnapshot[],
   mark: string,
   spec: TrimSpec,
-  widths: { stool?: number; extension?: number },
+  widths: { stool?: number; extension?: number; mullion?: number },
   casingOverride: PriceItemSnapshot | null,
 ): { picked: Partial<Record<Material, PriceItemSnapshot>>; gaps: ItemGap[] } {
   const of = (kind: Material) => items.filter((i) => i.kind === kind);
@@ -68,6 +68,19 @@ export function findItems(
         width: widths.extension,
         thickness: spec.extensionThickness ?? 0.75,
         message: `${mark} needs jamb extension ${formatLength(widths.extension)} wide: the price book has no extension stock that wide.`,
+      });
+    }
+  }
+  // Mullion casings are flat boards ripped to the mull's width, like extensions (common practice).
+  if (widths.mullion !== undefined) {
+    const board = narrowestWideEnough(of("extension"), widths.mullion);
+    if (board) picked.mullion = board;
+    else {
+      gaps.push({
+        material: "mullion",
+        width: widths.mullion,
+        thickness: spec.casingThickness,
+        message: `${mark} needs mullion casing ${formatLength(widths.mullion)} wide: the price book has no flat (extension) stock that wide to rip it from.`,
       });
     }
   }

@@ -1,9 +1,11 @@
 import { exact, Fraction, roundToCents, toNumber } from "../exact";
 import { formatLength } from "../length-format";
 import type { CutPiece, Material, TrimSpec } from "../types";
+import { splitLongPieces } from "../kinds/scarf";
 import { checkOpening, type OpeningProblem } from "./opening-check";
+import { openingOf } from "./opening-of";
 import { findItems, type ItemGap } from "./pick-items";
-import type { PriceItemSnapshot, TakeoffPrices } from "./types";
+import type { PriceItemSnapshot, TakeoffInputs, TakeoffPrices } from "./types";
 
 const PART_NAMES: Record<CutPiece["part"], string> = {
   "casing-leg": "casing leg",
@@ -21,15 +23,8 @@ const PART_NAMES: Record<CutPiece["part"], string> = {
   "extension-arch": "jamb extension arch",
 };
 
-/** One line of the window list as the takeoff sees it. */
-export interface OpeningTypeInput {
-  id: string;
-  mark: string;
-  width: number;
-  height: number;
-  setback: number;
-  trimSpec: TrimSpec;
-}
+/** One line of the window list as the takeoff sees it: a window, or another kind with its fields in `shape`. */
+export type OpeningTypeInput = Pick<TakeoffInputs["openingTypes"][number], "id" | "mark" | "width" | "height" | "setback" | "trimSpec" | "kind" | "shape">;
 
 /** A gap: what one opening type needs that the book cannot supply, and what would close it. */
 export interface PriceGap extends ItemGap {
@@ -52,16 +47,33 @@ const longestStock = (i: PriceItemSnapshot) => Math.max(...i.stock.map((s) => s.
 /**
  * One opening type against one price book: its cut list (or why it has none), the item each material
  * comes from, and the gaps — a size the book does not carry, or a piece longer than every stock length
- * of its item after the saw kerf.
+ * of its item after the saw kerf. With `scarfOverlap` (takeoffs since splicing) a piece longer than
+ * every stock length is spliced from two or more boards with scarf joints instead of being a gap.
+ * Only materials the opening's pieces use are picked: a door has no stool to find.
  */
-export function assessOpeningType(ot: OpeningTypeInput, prices: TakeoffPrices, kerf: number, override: PriceItemSnapshot | null): Assessment {
+export function assessOpeningType(
+  ot: OpeningTypeInput,
+  prices: TakeoffPrices,
+  kerf: number,
+  override: PriceItemSnapshot | null,
+  scarfOverlap?: number,
+): Assessment {
   const spec = override ? { ...ot.trimSpec, casingWidth: override.faceWidth, casingThickness: override.thickness } : ot.trimSpec;
-  const checked = checkOpening({ width: ot.width, height: ot.height, setback: ot.setback }, spec);
+  const checked = checkOpening(openingOf(ot), spec);
   if ("problem" in checked) return { ok: false, problem: { ...checked.problem, mark: ot.mark, openingTypeId: ot.id } };
-  const pieces = checked.pieces;
+  let pieces = checked.pieces;
   const widthOf = (m: Material) => pieces.find((p) => p.material === m && p.width !== undefined)?.width;
   const longest = (m: Material) => Math.max(0, ...pieces.filter((p) => p.material === m).map((p) => p.length));
-  const { picked, gaps: itemGaps } = findItems(prices.items, ot.mark, spec, { stool: widthOf("stool"), extension: widthOf("extension") }, override);
+  const found = findItems(prices.items, ot.mark, spec, { stool: widthOf("stool"), extension: widthOf("extension"), mullion: widthOf("mullion") }, override);
+  const used = new Set(pieces.map((p) => p.material));
+  const picked = Object.fromEntries(Object.entries(found.picked).filter(([m]) => used.has(m as Material))) as Partial<Record<Material, PriceItemSnapshot>>;
+  const itemGaps = found.gaps.filter((g) => used.has(g.material));
+  if (scarfOverlap !== undefined) {
+    pieces = pieces.flatMap((p) => {
+      const item = picked[p.material];
+      return item && p.radius === undefined && p.length + kerf > longestStock(item) ? splitLongPieces([p], item.stock.map((s) => s.length), { overlap: scarfOverlap, kerf }) : [p];
+    });
+  }
   const gaps: PriceGap[] = itemGaps.map((g) => ({
     ...g,
     openingTypeId: ot.id,
@@ -71,7 +83,7 @@ export function assessOpeningType(ot: OpeningTypeInput, prices: TakeoffPrices, k
     fix: `Add ${g.material === "extension" ? "extension stock" : g.material} of that size to the price book, or run with a placeholder price.`,
   }));
   for (const [material, item] of Object.entries(picked) as [Material, PriceItemSnapshot][]) {
-    const piece = pieces.filter((p) => p.material === material).sort((a, b) => b.length - a.length)[0];
+    const piece = pieces.filter((p) => p.material === material && p.radius === undefined).sort((a, b) => b.length - a.length)[0];
     if (!piece || piece.length + kerf <= longestStock(item)) continue;
     const need = Math.ceil((piece.length + kerf) / 12) * 12;
     gaps.push({

@@ -5,7 +5,7 @@
  * field added later is optional.
  */
 import type { Bid, LabourRates } from "../pricing";
-import type { CutPiece, Material, MaterialTotal, OpeningKind, StockPlan, TrimSpec } from "../types";
+import type { CutPiece, Material, MaterialTotal, Opening, OpeningKind, StockPlan, TrimSpec } from "../types";
 
 export interface TakeoffSettings {
   /** Saw kerf taken by every cut. */
@@ -97,7 +97,10 @@ export interface OpeningTypeResult {
   mark: string;
   quantity: number;
   spec: TrimSpec;
+  /** Overall size: for a mulled unit or bay the whole span, for a round-top the whole height. */
   opening: { width: number; height: number; setback: number };
+  /** The engine's opening with its kind's fields, for every kind but a plain window. */
+  kindOpening?: Opening;
   cutList: CutPiece[];
   /** Price-book item each material of this type is cut from. */
   items: Partial<Record<Material, string>>;

@@ -5,7 +5,7 @@ import type { TakeoffInputs, TakeoffPrices } from "@/takeoff";
  * Bumped whenever the engine can compute a different result from the same inputs (a new rounding, a
  * better board plan): results stored under an older version are then never reused.
  */
-export const TAKEOFF_ENGINE_VERSION = "2026-12-02.4"; // .2 exact money sums; .3 never worse than first-fit decreasing; .4 extensions planned along ripped strips
+export const TAKEOFF_ENGINE_VERSION = "2026-12-02.5"; // .2 exact money sums; .3 never worse than first-fit decreasing; .4 extensions planned along ripped strips
 
 /**
  * What a takeoff result depends on, hashed: the engine version, the snapshots of the window list, counts

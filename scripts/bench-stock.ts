@@ -8,7 +8,7 @@
  */
 import { planStock } from "../takeoff/index";
 import { loadHighs } from "../takeoff/stock-plan/highs-solver";
-import { cutgen, manySizes, triplet, uniform, type Instance } from "./bench-stock/families";
+import { cutgen, manySizes, manySizesWide, triplet, uniform, type Instance } from "./bench-stock/families";
 import { firstFitDecreasingBoards } from "./bench-stock/ffd";
 
 const instances: Instance[] = [
@@ -19,21 +19,24 @@ const instances: Instance[] = [
   ...[1, 2, 3].map((s) => cutgen(20, 0.01, 0.7, 50, s)),
   ...[1, 2, 3].map((s) => cutgen(40, 0.1, 0.8, 100, s)),
   ...[1, 2].map((s) => manySizes(300, s)),
+  ...[1, 2].map((s) => manySizesWide(500, s)),
 ];
 
 await loadHighs(); // once per process, as in production
-const rows = new Map<string, { n: number; atRef: number; over: number[]; vsFfd: number[]; worseThanFfd: number; ms: number[]; boundBelowTrivial: number }>();
+const rows = new Map<string, { n: number; atRef: number; over: number[]; vsFfd: number[]; worseThanFfd: number; ms: number[]; boundBelowTrivial: number; proven: number; spent: number }>();
 for (const inst of instances) {
   const stock = [{ length: inst.stockLength, price: inst.stockLength }];
   const t0 = performance.now();
-  const plan = await planStock(inst.demand, stock, { kerf: 0 });
+  const plan = await planStock(inst.demand, stock, { kerf: 0 }); // default budget, DEFAULT_PLAN_BUDGET_MS
   const ms = performance.now() - t0;
   const total = inst.demand.reduce((t, d) => t + d.length * d.quantity, 0);
   const trivial = Math.ceil(total / inst.stockLength);
   const proven = Math.ceil(plan.lowerBound.length / inst.stockLength - 1e-9);
   const reference = inst.optimum ?? Math.max(proven, trivial);
   const ffd = firstFitDecreasingBoards(inst.demand, inst.stockLength);
-  const row = rows.get(inst.family) ?? { n: 0, atRef: 0, over: [], vsFfd: [], worseThanFfd: 0, ms: [], boundBelowTrivial: 0 };
+  const row = rows.get(inst.family) ?? { n: 0, atRef: 0, over: [], vsFfd: [], worseThanFfd: 0, ms: [], boundBelowTrivial: 0, proven: 0, spent: 0 };
+  if (plan.proof === "optimal") row.proven++;
+  if (plan.budgetSpent) row.spent++;
   row.n++;
   if (plan.boardCount <= reference) row.atRef++;
   row.over.push(plan.boardCount - reference);
@@ -56,6 +59,8 @@ console.table(
     "boards ÷ FFD": mean(r.vsFfd).toFixed(3),
     "worse than FFD": r.worseThanFfd,
     "bound < trivial": r.boundBelowTrivial,
+    "proof optimal": r.proven,
+    "budget spent": r.spent,
     "mean ms": Math.round(mean(r.ms)),
     "max ms": Math.round(Math.max(...r.ms)),
   })),

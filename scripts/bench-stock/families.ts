@@ -71,3 +71,11 @@ export function manySizes(n: number, seed: number): Instance {
   const sizes = Array.from({ length: n }, () => 100 + Math.floor(rand() * 400));
   return { family: `many sizes n${n}`, name: `ms${n}-${seed}`, stockLength: 1000, demand: tally(sizes) };
 }
+
+/** About 500 distinct sizes: sizes uniform on [1000, 4999] against 10,000, one piece each (same spirit as manySizes, wider range). */
+export function manySizesWide(n: number, seed: number): Instance {
+  const rand = prng(seed);
+  const sizes = Array.from({ length: n }, () => 1000 + Math.floor(rand() * 4000));
+  const demand = tally(sizes);
+  return { family: `many sizes n${n} (${demand.length} distinct)`, name: `msw${n}-${seed}`, stockLength: 10_000, demand };
+}

@@ -13,6 +13,10 @@ export interface MipResult {
 export interface MipLimits {
   nodes: number;
   seconds: number;
+  /** Stop as soon as a plan of at most this objective is found (it meets the proven bound). */
+  target?: number;
+  /** A known plan over these patterns (pattern index → boards), handed to HiGHS as its first incumbent. */
+  start?: ReadonlyMap<number, number>;
 }
 
 /**
@@ -79,7 +83,12 @@ export function patternMip(
       mip_rel_gap: 0,
       mip_max_nodes: limits.nodes,
       time_limit: limits.seconds,
+      ...(limits.target === undefined ? {} : { objective_target: limits.target }),
     });
+    if (limits.start) {
+      const start = limits.start;
+      model.setSolution({ colValue: patterns.map((_, j) => start.get(j) ?? 0) });
+    }
     const status = model.run().modelStatus;
     const x = model.getSolution().colValue;
     const columns: CountedColumn[] = [];

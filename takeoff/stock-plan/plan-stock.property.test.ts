@@ -40,7 +40,7 @@ describe("planStock properties (fast-check)", () => {
       }),
       { numRuns: 40 },
     );
-  });
+  }, 30_000);
 
   it("small instances reach the proven optimum of the HiGHS MIP over every pattern; the bounds are valid and tight (highs package)", async () => {
     await fc.assert(

@@ -125,7 +125,7 @@ describe("planStock rules", () => {
 
   it("plans nothing for no demand", async () => {
     const p = await planStock([{ length: 10, quantity: 0 }], [{ length: 96, price: 5 }], { kerf: 0.125 });
-    expect(p).toEqual({ boards: [], boardCount: 0, purchasedLength: 0, cost: 0, lowerBound: { length: 0, cost: 0 } });
+    expect(p).toEqual({ boards: [], boardCount: 0, purchasedLength: 0, cost: 0, lowerBound: { length: 0, cost: 0 }, proof: "optimal", budgetSpent: false });
   });
 
   it("merges equal lengths given twice", async () => {

@@ -2,7 +2,12 @@
  * Primal revised simplex for the restricted master LP of column generation:
  *   minimise c·x  subject to  A x ≥ d,  x ≥ 0,
  * with sparse columns and a dense explicit basis inverse (a job has tens of
- * rows, so an m×m inverse is a few thousand numbers). Adding a column keeps
+ * rows, so an m×m inverse is a few thousand numbers; 500 sizes make 250,000,
+ * still cheap). Each pivot updates the inverse in product form touching only
+ * the nonzeros of the pivot row, and the duals in O(m) from the same row, so
+ * a pivot is O(m · nonzeros) rather than O(m²) twice over; the inverse is
+ * rebuilt from the basis columns every max(64, m) pivots, which keeps the
+ * O(m³) rebuild below the cost of the pivots between. Adding a column keeps
  * the basis primal feasible, so each round of column generation resumes with
  * a few pivots. Bland's rule takes over after a run of degenerate pivots so
  * the method cannot cycle.
@@ -19,7 +24,7 @@ export interface LpSolution {
   y: Float64Array;
 }
 
-const REFACTOR_EVERY = 64;
+const REFACTOR_MIN = 64;
 const PIVOT_TOL = 1e-9;
 const DEGENERATE_SWITCH = 40;
 
@@ -39,6 +44,11 @@ export class MasterLp {
   private readonly basicSurplus: Uint8Array;
   private binv: Float64Array;
   private readonly xb: Float64Array;
+  /** Scratch for a pivot: nonzero positions and values of the pivot row. */
+  private readonly nz: Int32Array;
+  private readonly pivotRow: Float64Array;
+  /** Row duals c_B B⁻¹, kept current across pivots. */
+  private y: Float64Array;
   private pivots = 0;
   private ready = false;
 
@@ -49,6 +59,9 @@ export class MasterLp {
     this.basicSurplus = new Uint8Array(this.m).fill(1);
     this.binv = new Float64Array(this.m * this.m);
     this.xb = new Float64Array(this.m);
+    this.y = new Float64Array(this.m);
+    this.nz = new Int32Array(this.m);
+    this.pivotRow = new Float64Array(this.m);
     for (let r = 0; r < this.m; r++) this.basic[r] = -r - 1;
   }
 
@@ -132,6 +145,7 @@ export class MasterLp {
     }
     const inv = new Float64Array(m * m);
     for (let k = 0; k < m; k++) inv[k * m + k] = 1;
+    const nz = new Int32Array(m);
     for (let c = 0; c < m; c++) {
       let p = c;
       for (let k = c + 1; k < m; k++) if (Math.abs(a[k * m + c]!) > Math.abs(a[p * m + c]!)) p = k;
@@ -144,17 +158,23 @@ export class MasterLp {
           [inv[p * m + j], inv[c * m + j]] = [inv[c * m + j]!, inv[p * m + j]!];
         }
       }
+      // Basis columns are sparse: eliminate along the nonzeros of the pivot row only.
+      let count = 0;
       for (let j = 0; j < m; j++) {
         a[c * m + j]! /= piv;
         inv[c * m + j]! /= piv;
       }
+      for (let j = c + 1; j < m; j++) if (a[c * m + j] !== 0) nz[count++] = j;
+      const aCount = count;
+      for (let j = 0; j < m; j++) if (inv[c * m + j] !== 0) nz[count++] = j;
       for (let k = 0; k < m; k++) {
         const f = a[k * m + c]!;
         if (k === c || f === 0) continue;
-        for (let j = 0; j < m; j++) {
-          a[k * m + j]! -= f * a[c * m + j]!;
-          inv[k * m + j]! -= f * inv[c * m + j]!;
-        }
+        const row = k * m;
+        const src = c * m;
+        a[row + c] = 0;
+        for (let t = 0; t < aCount; t++) a[row + nz[t]!]! -= f * a[src + nz[t]!]!;
+        for (let t = aCount; t < count; t++) inv[row + nz[t]!]! -= f * inv[src + nz[t]!]!;
       }
     }
     this.binv = inv;
@@ -164,6 +184,7 @@ export class MasterLp {
       this.xb[r] = Math.max(0, s);
     }
     this.pivots = 0;
+    this.y = this.duals();
   }
 
   private duals(): Float64Array {
@@ -208,8 +229,8 @@ export class MasterLp {
     const m = this.m;
     const tol = 1e-9 * Math.max(1, ...this.costs);
     let degenerate = 0;
-    for (let guard = 0; guard < 100_000; guard++) {
-      const y = this.duals();
+    for (let guard = 0; guard < 1_000_000; guard++) {
+      const y = this.y;
       const enter = this.entering(y, degenerate >= DEGENERATE_SWITCH, tol);
       if (enter === undefined) return this.solution(y);
       const u = new Float64Array(m);
@@ -239,27 +260,50 @@ export class MasterLp {
       }
       if (leave < 0) throw new Error("master LP: unbounded (a board with negative cost?)");
       degenerate = ratio <= 1e-12 ? degenerate + 1 : 0;
-      this.pivot(leave, enter, u, ratio);
+      this.pivot(leave, enter, u, ratio, this.reducedCost(enter, y));
     }
     throw new Error("master LP: iteration limit");
   }
 
-  private pivot(leave: number, enter: number, u: Float64Array, ratio: number): void {
+  private reducedCost(v: number, y: Float64Array): number {
+    if (v < 0) return y[-v - 1]!;
+    const col = this.cols[v]!;
+    let rc = this.costs[v]!;
+    for (let t = 0; t < col.idx.length; t++) rc -= y[col.idx[t]!]! * col.val[t]!;
+    return rc;
+  }
+
+  private pivot(leave: number, enter: number, u: Float64Array, ratio: number, rc: number): void {
     const m = this.m;
     const inv = this.binv;
     const pr = u[leave]!;
     const row = leave * m;
-    for (let k = 0; k < m; k++) inv[row + k]! /= pr;
+    const nz = this.nz;
+    const pivotRow = this.pivotRow;
+    let count = 0;
+    for (let k = 0; k < m; k++) {
+      const v = inv[row + k]!;
+      if (v === 0) continue;
+      nz[count] = k;
+      pivotRow[count++] = v / pr;
+    }
+    const y = this.y;
+    for (let t = 0; t < count; t++) {
+      const k = nz[t]!;
+      inv[row + k] = pivotRow[t]!;
+      // New duals: y + d_q · (row `leave` of the new inverse), d_q the entering reduced cost.
+      y[k]! += rc * pivotRow[t]!;
+    }
     for (let r = 0; r < m; r++) {
       const f = u[r]!;
       if (r === leave || f === 0) continue;
       const base = r * m;
-      for (let k = 0; k < m; k++) inv[base + k]! -= f * inv[row + k]!;
+      for (let t = 0; t < count; t++) inv[base + nz[t]!]! -= f * pivotRow[t]!;
       this.xb[r] = Math.max(0, this.xb[r]! - f * ratio);
     }
     this.xb[leave] = ratio;
     this.setBasic(leave, enter);
-    if (++this.pivots >= REFACTOR_EVERY) this.refactor();
+    if (++this.pivots >= Math.max(REFACTOR_MIN, m)) this.refactor();
   }
 
   private solution(y: Float64Array): LpSolution {
@@ -271,6 +315,6 @@ export class MasterLp {
       x[v] = this.xb[r]!;
       objective += this.costs[v]! * this.xb[r]!;
     }
-    return { objective, x, y };
+    return { objective, x, y: Float64Array.from(y) };
   }
 }

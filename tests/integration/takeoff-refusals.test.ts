@@ -37,15 +37,17 @@ const tagged = async (input: Parameters<typeof createOpeningType>[1]) => {
 };
 
 describe("a takeoff explains what it cannot do, never a 500", () => {
-  it("a 20' window: its casing head is longer than every stock length — 422 naming the type, the piece and the fix", async () => {
+  it("a 20' window: its casing head is longer than every stock length — spliced from two boards with a scarf joint, not refused", async () => {
+    // Before splicing, this run was refused with "W20's casing head is 20'-5 1/4" long, but the longest stock … is 12'".
     await tagged({ mark: "W20", width: 240, height: 60, setback: 0, trimSpec: { casingWidth: 2.5, casingThickness: 0.6875 } });
-    const before = await snapshot();
     const res = await run();
-    expect(res.status).toBe(422);
-    expect(res.json.error).toMatch(/W20's casing head is 20'-5 1\/4" long, but the longest stock of “Casing 2 1\/2 × 11\/16 pine” is 12'/);
-    expect(res.json.error).toMatch(/Add a 21'(-0")? length to “Casing 2 1\/2 × 11\/16 pine”/);
-    expect(res.json.fields?.priceBookId).toBe(res.json.error);
-    expect(await snapshot()).toBe(before);
+    expect(res.status).toBe(201);
+    const t = res.json.takeoff as TakeoffView;
+    const heads = t.result.openingTypes.find((o) => o.mark === "W20")!.cutList.filter((p) => p.part === "casing-head");
+    // 20'-5 1/4" (245 1/4") plus the company's 1" scarf overlap, in two parts that each fit a 12' board with a kerf.
+    expect(heads.map((p) => p.scarf)).toEqual([expect.objectContaining({ of: 2, overlap: 1 }), expect.objectContaining({ of: 2, overlap: 1 })]);
+    expect(heads.every((p) => p.length + 0.125 <= 144)).toBe(true);
+    expect(heads.reduce((n, p) => n + p.length * p.quantity, 0)).toBeGreaterThanOrEqual(245.25 + 1);
   });
 
   it("an apron inset larger than the window is refused on save (create and edit), naming trimSpec.apronInset", async () => {

@@ -20,7 +20,6 @@ export function unitsElevation(ot: ElevationInput, o: MulledOpening | BayOpening
   const n = o.widths.length;
   const right = (i: number) => xs[i]! + o.widths[i]!;
   const S = right(n - 1);
-  const cx = S / 2;
   const leg = lengthOf(cut, "casing-leg") ?? H + r + c;
   const legTop = frame ? H / 2 - leg / 2 : H - leg;
   const legFoot = frame ? H / 2 + leg / 2 : H;

@@ -46,37 +46,64 @@ function DimensionLine({ d, unit }: { d: Dimension; unit: number }) {
 }
 
 /**
- * A window's trim drawn to scale as seen from the room. Hidden (dashed) outlines are the jamb extensions
- * behind the casing. The cut list beside it is the text equivalent, so the picture is described briefly.
+ * An opening's trim drawn to scale as seen from the room. Hidden (dashed) outlines are the jamb extensions
+ * behind the casing; curved pieces are true arcs. The cut list beside it is the text equivalent, so the
+ * picture is described briefly.
  */
 export function ElevationDrawing({ e, title }: { e: Elevation; title: string }) {
   const { minX, minY, maxX, maxY } = e.bounds;
   const u = e.unit;
-  const { width: W, height: H } = e.opening;
   return (
     <svg viewBox={`${minX} ${minY} ${maxX - minX} ${maxY - minY}`} className="h-auto w-full" role="img" aria-label={title}>
-      <rect x={0} y={0} width={W} height={H} className="fill-spruce-50 stroke-graphite-500" style={HAIR} />
-      <text x={W / 2} y={H / 2 - 0.4 * u} textAnchor="middle" fontSize={0.85 * u} className="fill-graphite-600">
-        Jamb opening
-      </text>
-      <text x={W / 2} y={H / 2 + 0.8 * u} textAnchor="middle" fontSize={0.85 * u} className="fill-graphite-600">
-        {tapeLength(W)} × {tapeLength(H)}
-      </text>
+      {e.openings.map((o, i) => (
+        <g key={`o${i}`}>
+          <path d={o.d} className="fill-spruce-50 stroke-graphite-500" style={HAIR} />
+          <text x={o.at.x} y={o.at.y - 0.4 * u} textAnchor="middle" fontSize={0.85 * u} className="fill-graphite-600">
+            {o.lines[0]}
+          </text>
+          <text x={o.at.x} y={o.at.y + 0.8 * u} textAnchor="middle" fontSize={0.85 * u} className="fill-graphite-600">
+            {o.lines[1]}
+          </text>
+        </g>
+      ))}
+      {e.marks.map((m, i) => (
+        <g key={`m${i}`}>
+          <path
+            d={`M${m.line[0].x} ${m.line[0].y}L${m.line[1].x} ${m.line[1].y}`}
+            className="stroke-graphite-700"
+            strokeWidth={m.kind === "floor" ? 2 : 1}
+            strokeDasharray={m.kind === "fold" ? "8 3 2 3" : undefined}
+            style={HAIR}
+          />
+          <text x={m.at.x} y={m.at.y} textAnchor="middle" fontSize={0.85 * u} className="fill-graphite-700">
+            {m.text}
+          </text>
+        </g>
+      ))}
       {e.pieces
         .filter((p) => p.hidden)
         .map((p, i) => (
-          <path key={`h${i}`} d={path(p.points)} className="fill-none stroke-graphite-600" strokeDasharray="4 3" style={HAIR} />
+          <path key={`h${i}`} d={p.d ?? path(p.points)} className="fill-none stroke-graphite-600" strokeDasharray="4 3" style={HAIR} />
         ))}
       {e.pieces
         .filter((p) => !p.hidden)
         .map((p, i) => (
-          <path key={`p${i}`} d={path(p.points)} className={`${FILL[p.part.split("-")[0]!] ?? FILL.casing} stroke-graphite-900`} strokeWidth={1.25} style={HAIR} />
+          <path key={`p${i}`} d={p.d ?? path(p.points)} className={`${FILL[p.part.split("-")[0]!] ?? FILL.casing} stroke-graphite-900`} strokeWidth={1.25} style={HAIR} />
         ))}
       {e.dimensions.map((d) => (
         <DimensionLine key={d.key} d={d} unit={u} />
       ))}
-      {e.callouts.map((c) => (
-        <g key={c.text}>
+      {e.radii.map((rl, i) => (
+        <g key={`r${i}`}>
+          <path d={`M${rl.from.x} ${rl.from.y}L${rl.to.x} ${rl.to.y}`} className="stroke-graphite-900" style={HAIR} />
+          <circle cx={rl.to.x} cy={rl.to.y} r={0.25 * u} className="fill-graphite-900" />
+          <text x={rl.from.x} y={rl.from.y + 1.1 * u} textAnchor="middle" fontSize={u} className="fill-graphite-900">
+            {rl.text}
+          </text>
+        </g>
+      ))}
+      {e.callouts.map((c, i) => (
+        <g key={`c${i}`}>
           <path d={`M${c.anchor.x} ${c.anchor.y}L${e.calloutX - 0.8 * u} ${c.y - 0.35 * u}H${e.calloutX - 0.3 * u}`} className="fill-none stroke-graphite-500" style={HAIR} />
           <circle cx={c.anchor.x} cy={c.anchor.y} r={0.22 * u} className="fill-graphite-900" />
           <text x={e.calloutX} y={c.y} fontSize={u} className="fill-graphite-900">

@@ -1,194 +1,37 @@
-import { TRIM_DEFAULTS, type CutPiece, type Part } from "@/takeoff";
-import { placeCallouts, textWidth, type PlacedCallout } from "./elevation-callouts";
-import { PART_LABELS } from "./labels";
-import type { OpeningTypeResult, PriceItemSnapshot } from "@/takeoff";
+import type { Opening, PriceItemSnapshot } from "@/takeoff";
+import { archElevation } from "./elevation/arch";
+import { finish, type ElevationInput } from "./elevation/common";
+import { doorElevation } from "./elevation/door";
+import { unitsElevation } from "./elevation/units";
+import { windowElevation } from "./elevation/window";
+import type { Elevation } from "./elevation/types";
+
+export type { Dimension, DrawnPiece, Elevation, Mark, OpeningShape, Pt, RadiusLabel } from "./elevation/types";
+export type { ElevationInput } from "./elevation/common";
 
 /**
- * One window's trim as seen from the room, in inches, y downward, with the origin at the top-left corner of
- * the jamb opening. Every piece is drawn at its cut-list length, so the picture and the cut list cannot
- * disagree: a leg stands on the stool and rises its cut length; the head spans the legs' outer edges.
+ * The opening type's trim seen from the room, drawn to scale from its cut list, for every opening kind.
+ * An opening saved before kinds existed has no `kind` and is a window. A kind this code does not know
+ * (a newer engine's), or units without widths, gets an empty frame rather than a wrong drawing or a throw.
  */
-export type Pt = { x: number; y: number };
-
-export interface DrawnPiece {
-  part: Part;
-  /** Outline, clockwise from the first corner; miters show as the slanted edge. */
-  points: Pt[];
-  /** Jamb extensions sit behind the casing: drawn as hidden (dashed) lines. */
-  hidden: boolean;
+export function elevation(ot: ElevationInput, items: PriceItemSnapshot[] = []): Elevation {
+  const o: Opening = ot.opening;
+  switch (o.kind) {
+    case undefined:
+    case "window":
+      return windowElevation(ot, o, items);
+    case "mulled":
+    case "bay":
+      return o.widths.length > 0 ? unitsElevation(ot, o, items) : blank();
+    case "door":
+      return doorElevation(ot, o);
+    case "round-top":
+    case "segment-top":
+      return archElevation(ot, o, items);
+    default:
+      return blank();
+  }
 }
 
-export interface Dimension {
-  key: "casing-width" | "leg" | "stool" | "apron";
-  label: string;
-  axis: "x" | "y";
-  /** Span along the axis, and where the dimension line runs across it. */
-  from: number;
-  to: number;
-  at: number;
-  /** Where the witness lines start (the piece's edge). */
-  base: number;
-  value: number;
-}
-
-export interface Elevation {
-  opening: { width: number; height: number };
-  pieces: DrawnPiece[];
-  dimensions: Dimension[];
-  callouts: PlacedCallout[];
-  calloutX: number;
-  /** Text size and spacing unit, proportional to the window so every drawing reads alike when fitted. */
-  unit: number;
-  scaleBar: { x: number; y: number; length: number };
-  bounds: { minX: number; minY: number; maxX: number; maxY: number };
-}
-
-const rect = (x0: number, y0: number, x1: number, y1: number): Pt[] => [
-  { x: x0, y: y0 },
-  { x: x1, y: y0 },
-  { x: x1, y: y1 },
-  { x: x0, y: y1 },
-];
-
-const lengthOf = (cut: CutPiece[], part: Part) => cut.find((p) => p.part === part)?.length;
-
-/** Face size of the stool's front edge and of the apron: the price-book items they are cut from, when known. */
-function itemSizes(ot: OpeningTypeResult, items: PriceItemSnapshot[]) {
-  const find = (id: string | undefined) => items.find((i) => i.id === id);
-  return {
-    stoolThickness: find(ot.items.stool)?.thickness ?? 1,
-    apronWidth: find(ot.items.apron)?.faceWidth ?? ot.spec.casingWidth,
-  };
-}
-
-export function elevation(ot: OpeningTypeResult, items: PriceItemSnapshot[] = []): Elevation {
-  const { width: W, height: H } = ot.opening;
-  const c = ot.spec.casingWidth;
-  const r = ot.spec.reveal ?? TRIM_DEFAULTS.reveal;
-  const t = ot.spec.extensionThickness ?? TRIM_DEFAULTS.extensionThickness;
-  const cut = ot.cutList;
-  const cx = W / 2;
-  const frame = ot.spec.style === "picture-frame";
-  const pieces: DrawnPiece[] = [];
-  const add = (part: Part, points: Pt[], hidden = false) => pieces.push({ part, points, hidden });
-
-  const leg = lengthOf(cut, "casing-leg") ?? 0;
-  const head = lengthOf(cut, "casing-head") ?? W + 2 * (r + c);
-  // Stool-and-apron legs stand on the stool (y = H); picture-frame legs are centred on the opening.
-  const legTop = frame ? H / 2 - leg / 2 : H - leg;
-  const legFoot = frame ? H / 2 + leg / 2 : H;
-  const outL = -r - c;
-  const outR = W + r + c;
-  const topMiter = c;
-  const footMiter = frame ? c : 0;
-  add("casing-leg", [
-    { x: outL, y: legFoot },
-    { x: outL, y: legTop },
-    { x: -r, y: legTop + topMiter },
-    { x: -r, y: legFoot - footMiter },
-  ]);
-  add("casing-leg", [
-    { x: outR, y: legTop },
-    { x: outR, y: legFoot },
-    { x: W + r, y: legFoot - footMiter },
-    { x: W + r, y: legTop + topMiter },
-  ]);
-  const hx0 = cx - head / 2;
-  const hx1 = cx + head / 2;
-  add("casing-head", [
-    { x: hx0, y: legTop },
-    { x: hx1, y: legTop },
-    { x: hx1 - c, y: legTop + c },
-    { x: hx0 + c, y: legTop + c },
-  ]);
-
-  const { stoolThickness, apronWidth } = itemSizes(ot, items);
-  const stool = lengthOf(cut, "stool");
-  const apron = lengthOf(cut, "apron");
-  let foot = legFoot;
-  if (frame) {
-    const bottom = lengthOf(cut, "casing-bottom") ?? head;
-    add("casing-bottom", [
-      { x: cx + bottom / 2, y: legFoot },
-      { x: cx - bottom / 2, y: legFoot },
-      { x: cx - bottom / 2 + c, y: legFoot - c },
-      { x: cx + bottom / 2 - c, y: legFoot - c },
-    ]);
-  }
-  if (!frame && stool !== undefined) {
-    add("stool", rect(cx - stool / 2, H, cx + stool / 2, H + stoolThickness));
-    foot = H + stoolThickness;
-  }
-  const apronTop = foot;
-  if (!frame && apron !== undefined) {
-    add("apron", rect(cx - apron / 2, apronTop, cx + apron / 2, apronTop + apronWidth));
-    foot = apronTop + apronWidth;
-  }
-
-  // Extensions continue the window's jambs out to the wall face: their edges sit just outside the opening.
-  const side = lengthOf(cut, "extension-side");
-  const extHead = lengthOf(cut, "extension-head");
-  const extBottom = lengthOf(cut, "extension-bottom");
-  if (side !== undefined) {
-    const sTop = frame ? H / 2 - side / 2 : H - side;
-    const sFoot = frame ? H / 2 + side / 2 : H;
-    add("extension-side", rect(-t, sTop, 0, sFoot), true);
-    add("extension-side", rect(W, sTop, W + t, sFoot), true);
-  }
-  if (extHead !== undefined) add("extension-head", rect(cx - extHead / 2, -t, cx + extHead / 2, 0), true);
-  if (extBottom !== undefined) add("extension-bottom", rect(cx - extBottom / 2, H, cx + extBottom / 2, H + t), true);
-
-  const leftEdge = Math.min(outL, hx0, stool === undefined || frame ? outL : cx - stool / 2);
-  const rightEdge = Math.max(outR, hx1, stool === undefined || frame ? outR : cx + stool / 2);
-  const unit = Math.max(rightEdge - leftEdge, foot - legTop) / 30;
-  const gap = 2.6 * unit;
-
-  const dimensions: Dimension[] = [
-    { key: "casing-width", label: "Overall casing width", axis: "x", from: hx0, to: hx1, base: legTop, at: legTop - gap, value: head },
-    { key: "leg", label: "Casing leg", axis: "y", from: legTop, to: legFoot, base: outL, at: leftEdge - gap, value: leg },
-  ];
-  let below = foot;
-  if (!frame && apron !== undefined) {
-    below += gap;
-    dimensions.push({ key: "apron", label: "Apron", axis: "x", from: cx - apron / 2, to: cx + apron / 2, base: foot, at: below, value: apron });
-  }
-  if (!frame && stool !== undefined) {
-    below += gap;
-    dimensions.push({ key: "stool", label: "Stool", axis: "x", from: cx - stool / 2, to: cx + stool / 2, base: H + stoolThickness, at: below, value: stool });
-  }
-
-  const quantity = (part: Part) => cut.find((p) => p.part === part)?.quantity ?? 1;
-  // Names only: the lengths are on the dimension lines and in the cut list, and short names keep the text large.
-  const name = (part: Part) => `${PART_LABELS[part]}${quantity(part) > 1 ? ` ×${quantity(part)}` : ""}`;
-  const anchors: [Part, Pt][] = [
-    ["casing-head", { x: hx1 - 1.5 * c, y: legTop + c / 2 }],
-    ["casing-leg", { x: outR - c / 2, y: legTop + (legFoot - legTop) * 0.3 }],
-  ];
-  if (side !== undefined) anchors.push(["extension-side", { x: W + t / 2, y: legTop + (legFoot - legTop) * 0.6 }]);
-  if (extHead !== undefined) anchors.push(["extension-head", { x: cx + W / 4, y: -t / 2 }]);
-  if (extBottom !== undefined) anchors.push(["extension-bottom", { x: cx + W / 4, y: H + t / 2 }]);
-  if (frame) anchors.push(["casing-bottom", { x: hx1 - 1.5 * c, y: legFoot - c / 2 }]);
-  if (!frame && stool !== undefined) anchors.push(["stool", { x: cx + stool / 2 - Math.max((stool - head) / 4, 0.25), y: H + stoolThickness / 2 }]);
-  if (!frame && apron !== undefined) {
-    anchors.push(["apron", { x: cx + apron / 4, y: apronTop + apronWidth / 2 }]);
-    if (lengthOf(cut, "apron-return") !== undefined) anchors.push(["apron-return", { x: cx + apron / 2, y: apronTop + apronWidth * 0.75 }]);
-  }
-  const lineGap = 1.7 * unit;
-  // Names may run down beside the dimension lines: pinned at the drawing's foot, low leaders would cross.
-  const callouts = placeCallouts(anchors.map(([part, anchor]) => ({ text: name(part), anchor })), lineGap, Math.max(foot, below));
-  const calloutX = rightEdge + 3 * unit;
-  const widest = Math.max(0, ...callouts.map((co) => textWidth(co.text, unit)));
-
-  const scaleBar = { x: leftEdge, y: below + gap, length: 12 };
-  const top = Math.min(legTop - gap - 1.4 * unit, ...callouts.map((co) => co.y - unit));
-  return {
-    opening: { width: W, height: H },
-    pieces,
-    dimensions,
-    callouts,
-    calloutX,
-    unit,
-    scaleBar,
-    bounds: { minX: leftEdge - gap - 1.6 * unit, minY: top, maxX: calloutX + widest + unit, maxY: scaleBar.y + 2 * unit },
-  };
-}
+const blank = (): Elevation =>
+  finish({ left: 0, right: 12, top: 0, foot: 12 }, 0.4, 12, { openings: [], pieces: [], dimensions: [], anchors: [], notes: ["No drawing for this kind of opening."] });

@@ -16,7 +16,7 @@ export function OpeningTypeSection({ ot, items }: { ot: OpeningTypeResult; items
   const drawing = elevation(ot, items);
   // A door's casing takes no style: the spec's stool or picture frame does not apply to it.
   // (Typed loosely: saved results before opening kinds hold a window's fields only.)
-  const opening = ot.opening as Opening;
+  const opening: Opening = ot.kindOpening ?? ot.opening;
   const door = opening.kind === "door";
   return (
     <section className="break-inside-avoid rounded-lg border border-maple-200 bg-white p-4 shadow-sm print:shadow-none" aria-labelledby={`ot-${ot.openingTypeId}`}>

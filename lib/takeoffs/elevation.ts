@@ -15,7 +15,7 @@ export type { ElevationInput } from "./elevation/common";
  * (a newer engine's), or units without widths, gets an empty frame rather than a wrong drawing or a throw.
  */
 export function elevation(ot: ElevationInput, items: PriceItemSnapshot[] = []): Elevation {
-  const o: Opening = ot.opening;
+  const o: Opening = ot.kindOpening ?? ot.opening;
   switch (o.kind) {
     case undefined:
     case "window":

@@ -6,6 +6,8 @@ import type { Dimension, DrawnPiece, Elevation, Mark, OpeningShape, Pt, RadiusLa
 /** What a drawing needs of an opening type: the opening as entered, its spec, the engine's cut list. */
 export interface ElevationInput {
   opening: Opening;
+  /** The engine opening of a kind other than a plain window (OpeningTypeResult.kindOpening); drawn instead of `opening`. */
+  kindOpening?: Opening;
   spec: TrimSpec;
   cutList: CutPiece[];
   items: Partial<Record<Material, string>>;

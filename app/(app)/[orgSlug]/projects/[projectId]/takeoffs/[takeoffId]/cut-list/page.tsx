@@ -44,7 +44,7 @@ export default async function CutListPage({ params }: { params: Promise<{ orgSlu
             {g.title} {g.units > 1 && <span className="text-base font-normal text-graphite-600">— {g.units} units; quantities per unit and for all {g.units}</span>}
           </h2>
           {g.windows.map((w) => (
-            <CrewCutListTable key={w.mark} w={w} units={g.units} opening={t.result.openingTypes.find((o) => o.mark === w.mark)?.opening} />
+            <CrewCutListTable key={w.mark} w={w} units={g.units} opening={((o) => o && (o.kindOpening ?? o.opening))(t.result.openingTypes.find((o) => o.mark === w.mark))} />
           ))}
         </section>
       ))}

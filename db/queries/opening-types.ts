@@ -2,6 +2,7 @@ import { and, asc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { openingTypes, organisations, tags } from "../schema";
 import type { TrimSpec, WallBuildUp } from "@/takeoff";
+import type { OpeningKindName, OpeningShape } from "@/takeoff/job/types";
 import type { ProjectScope } from "./project-scope";
 
 const fields = {
@@ -13,6 +14,8 @@ const fields = {
   wallBuildUp: openingTypes.wallBuildUp,
   trimSpec: openingTypes.trimSpec,
   notes: openingTypes.notes,
+  kind: openingTypes.kind,
+  shape: openingTypes.shape,
   version: openingTypes.version,
 } as const;
 
@@ -31,6 +34,10 @@ export interface OpeningTypeValues {
   wallBuildUp: WallBuildUp | null;
   trimSpec: TrimSpec;
   notes: string | null;
+  /** What the opening is; "window" for rows made before kinds existed. */
+  kind: OpeningKindName;
+  /** The kind's own fields (see OpeningShape); null for a plain window. */
+  shape: OpeningShape | null;
 }
 
 /** The organisation's trim defaults, or null when it has none saved. */

@@ -13,6 +13,7 @@ import {
 } from "drizzle-orm/pg-core";
 import type { TrimSpec } from "@/takeoff";
 import type { WallBuildUp } from "@/takeoff";
+import type { OpeningKindName, OpeningShape } from "@/takeoff/job/types";
 import { createdAt, updatedAt } from "./common";
 import { organisations, users } from "./accounts";
 import { projects } from "./projects";
@@ -131,6 +132,10 @@ export const openingTypes = pgTable(
     wallBuildUp: jsonb("wall_build_up").$type<WallBuildUp>(),
     trimSpec: jsonb("trim_spec").$type<TrimSpec>().notNull(),
     notes: text("notes"),
+    // What the opening is (see OpeningKindName); rows made before kinds existed are plain windows.
+    kind: text("kind").$type<OpeningKindName>().notNull().default("window"),
+    // The kind's own fields (mulled widths and gap, door sides, round-top spring height); null for a window.
+    shape: jsonb("shape").$type<OpeningShape>(),
     version: version(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),

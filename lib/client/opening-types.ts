@@ -38,6 +38,15 @@ export const openingTypeSchema = z.object({
   wallBuildUp: wallBuildUp.nullable(),
   trimSpec: trimSpecShape,
   notes: z.string().nullable(),
+  kind: z.enum(["window", "mulled", "door", "round-top"]),
+  shape: z
+    .object({
+      widths: z.array(z.number()).optional(),
+      mullGap: z.number().optional(),
+      sides: z.union([z.literal(1), z.literal(2)]).optional(),
+      springHeight: z.number().optional(),
+    })
+    .nullable(),
   version: z.number(),
 }) satisfies z.ZodType<OpeningTypeView>;
 const listSchema = z.object({ openingTypes: z.array(openingTypeSchema) });

@@ -81,6 +81,8 @@ describe("the window list", () => {
     expect(res.status).toBe(201);
     // 902 mm / 25.4 = 35.5118… in (1 in = 25.4 mm exactly, NIST Handbook 44 Appendix C).
     expect(res.json.openingType).toMatchObject({ width: 35.5, height: 59.5, trimSpec: { style: "stool-and-apron", casingWidth: 2.5 } });
+    // Rows are plain windows until a kind is given; the kind and its shape come back with every read.
+    expect(res.json.openingType).toMatchObject({ kind: "window", shape: null });
     expect((res.json.openingType as { setback: number }).setback).toBeCloseTo(902 / 25.4, 9);
   });
 

@@ -10,7 +10,7 @@ const row: OpeningTypeView = {
   setback: 0.75,
   wallBuildUp: null,
   trimSpec: { style: "stool-and-apron", casingWidth: 2.5, casingThickness: 0.6875, reveal: 0.0625 },
-  notes: null,
+  notes: null, kind: "window", shape: null,
   version: 1,
 };
 

@@ -39,7 +39,7 @@ export async function addOpeningType(s: ProjectScope, input: OpeningTypeCreateIn
   const trimSpec = checkedSpec((await findOrganisationTrimDefaults(s.orgId)) ?? FALLBACK_TRIM_SPEC, input.trimSpec);
   const setback = resolveSetback(input.setback, input.wallBuildUp);
   assertCuttable({ width: input.width, height: input.height, setback }, trimSpec);
-  const values = { mark: input.mark, width: input.width, height: input.height, setback, wallBuildUp: input.wallBuildUp ?? null, trimSpec, notes: input.notes ?? null };
+  const values = { mark: input.mark, width: input.width, height: input.height, setback, wallBuildUp: input.wallBuildUp ?? null, trimSpec, notes: input.notes ?? null, kind: "window" as const, shape: null };
   return insertOpeningType(s, values).catch((error) => {
     throw duplicateMark(error);
   });

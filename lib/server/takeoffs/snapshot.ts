@@ -25,7 +25,17 @@ export async function snapshotInputs(s: ProjectScope, casingItemId: string | nul
     casingItemId,
     ...(allowPlaceholders ? { allowPlaceholders: true } : {}),
     unitTypes: unitTypes.map((u) => ({ id: u.id, name: u.name, count: u.count })),
-    openingTypes: openingTypes.map((o) => ({ id: o.id, mark: o.mark, width: o.width, height: o.height, setback: o.setback, trimSpec: o.trimSpec })),
+    // kind and shape only when they say something: a plain window's inputs (and input hash) stay as before kinds.
+    openingTypes: openingTypes.map((o) => ({
+      id: o.id,
+      mark: o.mark,
+      width: o.width,
+      height: o.height,
+      setback: o.setback,
+      trimSpec: o.trimSpec,
+      ...(o.kind !== "window" ? { kind: o.kind } : {}),
+      ...(o.shape ? { shape: o.shape } : {}),
+    })),
     counts: {
       perUnit: Object.fromEntries(counts.unitTypes.map((u) => [u.unitTypeId, u.perUnit])),
       commonAreas: counts.commonAreas,

@@ -59,6 +59,7 @@ export {
 
 // A whole job from its snapshots: what a takeoff run executes and what a saved takeoff stores.
 export { computeTakeoff, type RunOptions } from "./job/compute";
+export { openingOf } from "./job/opening-of";
 export { DEFAULT_RUN_PLAN_SECONDS } from "./job/plan-budget";
 export { materialCost } from "./job/materials";
 export { MissingItem, OpeningTypeProblem, PriceGaps } from "./job/errors";
@@ -77,4 +78,6 @@ export type {
   TakeoffPrices,
   TakeoffResult,
   TakeoffSettings,
+  OpeningKindName,
+  OpeningShape,
 } from "./job/types";

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { kindFields, missingKindFields } from "./opening-kinds";
 import { trimSpecSchema, wallBuildUpSchema } from "@/takeoff";
 import { optionalText, text, uuid, version, versionParam } from "./common";
 import { lengthInput } from "./length";
@@ -63,6 +64,7 @@ const mark = z
 
 const openingFields = {
   mark,
+  ...kindFields,
   width: lengthInput("Width"),
   height: lengthInput("Height"),
   setback: lengthInput("Setback", { allowZero: true }).optional(),
@@ -73,11 +75,13 @@ const openingFields = {
 };
 
 export const openingTypeCreateSchema = z
-  .object(openingFields)
+  .object({ ...openingFields, width: openingFields.width.optional(), height: openingFields.height.optional() })
   .strict()
-  .refine((o) => o.setback !== undefined || o.wallBuildUp, {
-    message: "Give the setback, or a wall build-up to work it out from.",
-    path: ["setback"],
+  .superRefine((o, ctx) => {
+    const kind = o.kind ?? "window";
+    // A door stands on the floor in a wall it is hung in: its casing has no setback to cover.
+    if (kind !== "door" && o.setback === undefined && !o.wallBuildUp) ctx.addIssue({ code: "custom", path: ["setback"], message: "Give the setback, or a wall build-up to work it out from." });
+    for (const [field, message] of missingKindFields(kind, o)) ctx.addIssue({ code: "custom", path: [field], message });
   });
 export type OpeningTypeCreateInput = z.infer<typeof openingTypeCreateSchema>;
 

@@ -9,7 +9,7 @@ export interface OpeningProblem {
   message: string;
 }
 
-const OPENING_FIELDS = new Set(["width", "height", "setback"]);
+const OPENING_FIELDS = new Set(["width", "height", "setback", "kind", "widths", "mullGap", "sides", "springHeight", "rise", "turn", "seat"]);
 
 /**
  * Runs the cut list for one opening type and turns an engine refusal into words about this window.

@@ -1,5 +1,5 @@
 import { fieldErrors, invalid } from "@/lib/errors";
-import { checkOpening } from "@/takeoff";
+import { checkOpening, openingOf, type OpeningKindName, type OpeningShape } from "@/takeoff";
 import { trimSpecSchema, wallSetback, type TrimSpec, type WallBuildUp } from "@/takeoff";
 
 /** The spec as the engine will use it: organisation defaults under what was typed, checked by the engine's schema. */
@@ -22,7 +22,10 @@ export function resolveSetback(setback: number | undefined, wall: WallBuildUp | 
 }
 
 /** The sizes and spec together must make a window that can be cut, or the first takeoff would fail on it. */
-export function assertCuttable(opening: { width: number; height: number; setback: number }, trimSpec: TrimSpec) {
-  const checked = checkOpening(opening, trimSpec);
+export function assertCuttable(
+  opening: { width: number; height: number; setback: number; kind?: OpeningKindName; shape?: OpeningShape | null },
+  trimSpec: TrimSpec,
+) {
+  const checked = checkOpening(openingOf({ ...opening, shape: opening.shape ?? undefined }), trimSpec);
   if ("problem" in checked) throw invalid({ [checked.problem.field]: checked.problem.message }, checked.problem.message);
 }

@@ -19,6 +19,7 @@ import type { OpeningTypeCreateInput, OpeningTypeUpdateInput } from "@/lib/valid
 import { requireProject } from "@/lib/server/projects/require-project";
 import { requireConfirmed } from "./confirm-removal";
 import { tallyCounts } from "./counts";
+import { kindShape } from "./opening-kind-shape";
 import { assertCuttable, checkedSpec, resolveSetback } from "./opening-type-rules";
 
 const MISSING = "No such opening type.";
@@ -37,9 +38,11 @@ export async function openingTypesOf(s: ProjectScope): Promise<OpeningTypeView[]
 export async function addOpeningType(s: ProjectScope, input: OpeningTypeCreateInput): Promise<OpeningTypeView> {
   await requireProject(s);
   const trimSpec = checkedSpec((await findOrganisationTrimDefaults(s.orgId)) ?? FALLBACK_TRIM_SPEC, input.trimSpec);
-  const setback = resolveSetback(input.setback, input.wallBuildUp);
-  assertCuttable({ width: input.width, height: input.height, setback }, trimSpec);
-  const values = { mark: input.mark, width: input.width, height: input.height, setback, wallBuildUp: input.wallBuildUp ?? null, trimSpec, notes: input.notes ?? null, kind: "window" as const, shape: null };
+  const { kind, shape, width, height } = kindShape(input);
+  // A door's casing covers no wall depth: it has no setback unless one is typed.
+  const setback = kind === "door" && input.setback === undefined && !input.wallBuildUp ? 0 : resolveSetback(input.setback, input.wallBuildUp);
+  assertCuttable({ width, height, setback, kind, shape }, trimSpec);
+  const values = { mark: input.mark, width, height, setback, wallBuildUp: input.wallBuildUp ?? null, trimSpec, notes: input.notes ?? null, kind, shape };
   return insertOpeningType(s, values).catch((error) => {
     throw duplicateMark(error);
   });
@@ -49,7 +52,17 @@ export async function addOpeningType(s: ProjectScope, input: OpeningTypeCreateIn
 export async function editOpeningType(s: ProjectScope, id: string, input: OpeningTypeUpdateInput): Promise<OpeningTypeView> {
   const current = orNotFound(await findOpeningType(s, id), MISSING);
   if (current.version !== input.version) throw stale(current);
-  const { version, trimSpec, wallBuildUp, setback, ...rest } = input;
+  const { version, trimSpec, wallBuildUp, setback, kind: kindIn, widths, mullGap, sides, springHeight, rise, turn, ...rest } = input;
+  // A new kind takes only what was sent with it; the same kind keeps its stored fields under what was sent.
+  const kindChanged = kindIn !== undefined && kindIn !== current.kind;
+  const sent = Object.fromEntries(Object.entries({ widths, mullGap, sides, springHeight, rise, turn }).filter(([, v]) => v !== undefined));
+  const shaped = kindShape({
+    kind: kindIn ?? current.kind,
+    width: rest.width ?? current.width,
+    height: rest.height ?? current.height,
+    ...(kindChanged ? {} : (current.shape ?? {})),
+    ...sent,
+  });
   const wall = wallBuildUp === undefined ? current.wallBuildUp : wallBuildUp;
   const set = {
     ...rest,
@@ -57,9 +70,13 @@ export async function editOpeningType(s: ProjectScope, id: string, input: Openin
     // A typed setback replaces a derived one; otherwise a build-up keeps the setback in step with it.
     setback: setback !== undefined && wallBuildUp === undefined ? setback : resolveSetback(setback ?? current.setback, wall),
     trimSpec: trimSpec ? checkedSpec(current.trimSpec, trimSpec) : current.trimSpec,
+    kind: shaped.kind,
+    shape: shaped.shape,
+    width: shaped.width,
+    height: shaped.height,
   };
   if (setback !== undefined && wallBuildUp === undefined) set.wallBuildUp = null;
-  assertCuttable({ width: set.width ?? current.width, height: set.height ?? current.height, setback: set.setback }, set.trimSpec);
+  assertCuttable({ width: set.width, height: set.height, setback: set.setback, kind: set.kind, shape: set.shape }, set.trimSpec);
   const row = await updateOpeningTypeAt(s, id, version, set).catch((error) => {
     throw duplicateMark(error);
   });

@@ -20,7 +20,7 @@ export async function listPriceGaps(s: ProjectScope, priceBookId?: string): Prom
   const [prices, types, settings] = await Promise.all([snapshotPrices(s.orgId, bookId), listOpeningTypes(s), getSettings(s)]);
   const gaps: PriceGapsView["gaps"] = [];
   for (const ot of types) {
-    const a = assessOpeningType(ot, prices, settings.kerf, null, settings.scarfOverlap);
+    const a = assessOpeningType({ ...ot, shape: ot.shape ?? undefined }, prices, settings.kerf, null, settings.scarfOverlap);
     if (!a.ok) {
       gaps.push({ openingTypeId: ot.id, mark: ot.mark, material: "", kind: "cannot-cut", message: `${ot.mark}: ${a.problem.message}`, fix: `Change ${a.problem.field.replace(/^trimSpec\./, "")} on this line.` });
       continue;

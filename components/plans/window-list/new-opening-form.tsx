@@ -4,10 +4,11 @@ import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Notice } from "@/components/ui/card";
 import { FormError, SubmitButton } from "@/components/ui/form-error";
-import { Field, TextInput } from "@/components/ui/field";
+import { Field, Select, TextInput } from "@/components/ui/field";
 import type { OpeningTypeView } from "@/lib/plans/api-types";
 import { tape } from "@/lib/plans/window-list/length-text";
-import { EMPTY_DRAFT, planCreate, type OpeningDraft } from "@/lib/plans/window-list/new-opening";
+import { EMPTY_DRAFT, KIND_CHOICES, KIND_FIELDS, planCreate, type OpeningDraft } from "@/lib/plans/window-list/new-opening";
+import { KindFields } from "./kind-fields";
 import { request } from "@/lib/client/fetch";
 import { projectPath } from "@/lib/client/project-scope";
 import { useFormMutation } from "@/lib/client/use-form-mutation";
@@ -24,7 +25,7 @@ export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: strin
       onAdded(openingType);
       setAdded(openingType);
       // The next line of a window list usually shares the wall and trim: keep those, clear the rest.
-      setDraft((d) => ({ ...d, mark: "", width: "", height: "", notes: "" }));
+      setDraft((d) => ({ ...d, mark: "", width: "", height: "", widths: "", springHeight: "", rise: "", notes: "" }));
     },
   });
   const { errors } = create;
@@ -51,13 +52,28 @@ export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: strin
           <Field label="Mark" name="new-mark" error={errors.mark}>
             <TextInput name="new-mark" placeholder="W1" maxLength={12} value={draft.mark} onChange={(e) => set("mark", e.target.value)} error={errors.mark} />
           </Field>
-          <Field label="Width" name="new-width" error={errors.width} hint="Jamb to jamb">
-            <TextInput name="new-width" placeholder={`35 1/2 or 2'-11 1/2"`} value={draft.width} onChange={(e) => set("width", e.target.value)} error={errors.width} />
+          <Field label="Kind" name="new-kind" error={errors.kind}>
+            <Select name="new-kind" value={draft.kind} onChange={(e) => set("kind", e.target.value as OpeningDraft["kind"])}>
+              {KIND_CHOICES.map((k) => (
+                <option key={k.value} value={k.value}>
+                  {k.label}
+                </option>
+              ))}
+            </Select>
           </Field>
-          <Field label="Height" name="new-height" error={errors.height}>
-            <TextInput name="new-height" placeholder={`59 1/2 or 4'-11 1/2"`} value={draft.height} onChange={(e) => set("height", e.target.value)} error={errors.height} />
-          </Field>
+          {KIND_FIELDS[draft.kind].includes("width") && (
+            <Field label="Width" name="new-width" error={errors.width} hint="Jamb to jamb">
+              <TextInput name="new-width" placeholder={`35 1/2 or 2'-11 1/2"`} value={draft.width} onChange={(e) => set("width", e.target.value)} error={errors.width} />
+            </Field>
+          )}
+          {KIND_FIELDS[draft.kind].includes("height") && (
+            <Field label="Height" name="new-height" error={errors.height} hint={draft.kind === "door" ? "Floor to the underside of the head jamb" : undefined}>
+              <TextInput name="new-height" placeholder={`59 1/2 or 4'-11 1/2"`} value={draft.height} onChange={(e) => set("height", e.target.value)} error={errors.height} />
+            </Field>
+          )}
+          <KindFields draft={draft} set={set} errors={errors} />
         </div>
+        {KIND_FIELDS[draft.kind].includes("setback") && (
         <fieldset className="space-y-2">
           <legend className="text-sm font-semibold text-graphite-900">Setback (finished wall face to jamb edge)</legend>
           <div className="flex flex-wrap gap-4 text-sm">
@@ -82,6 +98,7 @@ export function NewOpeningForm({ orgSlug, projectId, onAdded }: { orgSlug: strin
           )}
           {draft.setbackFrom === "wall" && <WallBuildUpFields wall={draft.wall} onChange={(wall) => set("wall", wall)} errors={errors} />}
         </fieldset>
+        )}
         <TrimSpecFields draft={draft} set={set} errors={errors} />
         <Field label="Notes" name="new-notes" error={errors.notes}>
           <TextInput name="new-notes" maxLength={500} value={draft.notes} onChange={(e) => set("notes", e.target.value)} error={errors.notes} />

@@ -1,5 +1,6 @@
 import { trimSpecSchema, wallBuildUpSchema, wallSetback, type GypsumBoard, type StudSize, type Style, type TrimSpec, type WallBuildUp } from "@/takeoff";
 import { openingTypeCreateSchema, type OpeningTypeCreateInput } from "@/lib/validators/plans";
+import { OPENING_KIND_NAMES } from "@/lib/validators/opening-kinds";
 import { fieldErrorsOf } from "./field-errors";
 import { readLength } from "./length-text";
 
@@ -12,8 +13,38 @@ export interface WallDraft {
   frameDepth: string;
 }
 
+export type KindName = (typeof OPENING_KIND_NAMES)[number];
+
+/** The kinds the form offers, in the words an estimator uses. */
+export const KIND_CHOICES: { value: KindName; label: string }[] = [
+  { value: "window", label: "Window" },
+  { value: "mulled", label: "Mulled unit (twin, triple…)" },
+  { value: "door", label: "Door" },
+  { value: "round-top", label: "Round-top (half-round head)" },
+  { value: "segment-top", label: "Segment head (eyebrow)" },
+  { value: "bay", label: "Bay or bow" },
+];
+
+/** Which of the kind's own fields the form shows, beside mark and trim. */
+export const KIND_FIELDS: Record<KindName, ("width" | "height" | "widths" | "mullGap" | "sides" | "springHeight" | "rise" | "turn" | "setback")[]> = {
+  window: ["width", "height", "setback"],
+  mulled: ["widths", "mullGap", "height", "setback"],
+  door: ["width", "height", "sides"],
+  "round-top": ["width", "springHeight", "setback"],
+  "segment-top": ["width", "springHeight", "rise", "setback"],
+  bay: ["widths", "mullGap", "turn", "height", "setback"],
+};
+
 /** Trim fields left empty take the organisation's defaults on the server. */
 export interface OpeningDraft {
+  kind: KindName;
+  /** Unit widths, left to right, separated by commas (mulled units and bays). */
+  widths: string;
+  mullGap: string;
+  sides: "1" | "2";
+  springHeight: string;
+  rise: string;
+  turn: string;
   mark: string;
   width: string;
   height: string;
@@ -33,6 +64,13 @@ export interface OpeningDraft {
 }
 
 export const EMPTY_DRAFT: OpeningDraft = {
+  kind: "window",
+  widths: "",
+  mullGap: "",
+  sides: "2",
+  springHeight: "",
+  rise: "",
+  turn: "",
   mark: "",
   width: "",
   height: "",
@@ -117,8 +155,9 @@ export function planCreate(d: OpeningDraft): CreatePlan {
     }
   }
 
-  let setback: { setback: string } | { wallBuildUp: WallBuildUp } = { setback: d.setback };
-  if (d.setbackFrom === "wall") {
+  const shows = new Set(KIND_FIELDS[d.kind]);
+  let setback: { setback?: string } | { wallBuildUp: WallBuildUp } = shows.has("setback") ? { setback: d.setback } : {};
+  if (shows.has("setback") && d.setbackFrom === "wall") {
     const wall = readWall(d.wall);
     if (wall.ok) setback = { wallBuildUp: wall.wall };
     // A stand-in so the schema checks the rest without also blaming the (unused) typed setback.
@@ -128,16 +167,29 @@ export function planCreate(d: OpeningDraft): CreatePlan {
     }
   }
 
+  const typed = (key: "width" | "height" | "mullGap" | "springHeight" | "rise" | "turn") => (shows.has(key) && d[key].trim() !== "" ? { [key]: d[key] } : {});
   const parsed = openingTypeCreateSchema.safeParse({
     mark: d.mark,
-    width: d.width,
-    height: d.height,
+    ...(d.kind === "window" ? {} : { kind: d.kind }),
+    ...(shows.has("width") ? { width: d.width } : {}),
+    ...(shows.has("height") ? { height: d.height } : {}),
+    ...typed("mullGap"),
+    ...typed("springHeight"),
+    ...typed("rise"),
+    ...typed("turn"),
+    ...(shows.has("widths") && d.widths.trim() !== "" ? { widths: d.widths.split(",").map((w) => w.trim()).filter((w) => w !== "") } : {}),
+    ...(shows.has("sides") ? { sides: Number(d.sides) } : {}),
     ...setback,
     ...(Object.keys(trimSpec).length > 0 ? { trimSpec } : {}),
     notes: d.notes,
   });
   if (!parsed.success) {
-    for (const [key, message] of Object.entries(fieldErrorsOf(parsed.error))) fields[key] ??= message;
+    for (const [key, message] of Object.entries(fieldErrorsOf(parsed.error))) {
+      // One field holds every unit width: a message about the third says so there.
+      const unit = /^widths\.(\d+)$/.exec(key);
+      if (unit) fields.widths ??= `Unit ${Number(unit[1]) + 1}: ${message}`;
+      else fields[key] ??= message;
+    }
   }
   if (!parsed.success || Object.keys(fields).length > 0) return { kind: "invalid", fields };
   return { kind: "send", body: parsed.data };

@@ -26,6 +26,20 @@ const SPEC: Record<WindowMark, TrimSpec> = {
 };
 
 /**
+ * Openings of the other kinds on the same job (invented): a twin mulled unit in the living rooms, interior
+ * doors cased both sides, the unit entry door cased on the room side only, a round-top over the stair
+ * landing and a three-unit bay. Tagged beside the drawn windows on the tagged unit plans, at `at` (a
+ * fraction of the sheet's width and height), since the generated drawings show windows only.
+ */
+const OTHER_KINDS = [
+  { input: { mark: "M1", kind: "mulled", widths: [35.5, 35.5], mullGap: 1.5, height: 60, notes: "TWIN SINGLE HUNG, MULLED" }, at: [0.3, 0.42] },
+  { input: { mark: "D1", kind: "door", width: 30, height: 80, sides: 2, setback: 0, notes: "INTERIOR PASSAGE DOOR" }, at: [0.45, 0.5] },
+  { input: { mark: "D2", kind: "door", width: 36, height: 80, sides: 1, setback: 0, notes: "UNIT ENTRY DOOR" }, at: [0.55, 0.58] },
+  { input: { mark: "R1", kind: "round-top", width: 48, springHeight: 40, notes: "HALF-ROUND OVER STAIR LANDING" }, at: [0.62, 0.35] },
+  { input: { mark: "B1", kind: "bay", widths: [24, 48, 24], mullGap: 3, turn: 45, height: 54, notes: "45° BAY, LIVING ROOM" }, at: [0.38, 0.62] },
+] as const;
+
+/**
  * The demo project's drawings: a generated plan set stored through the upload service (the local
  * stand-in), its sheets, unit types and window list, most sheets calibrated and some tagged — so a
  * newcomer sees the workflow under way. Skips a project that already has plan sets.
@@ -59,6 +73,12 @@ export async function seedDemoPlans(orgId: string, projectId: string | null, use
     });
     openingTypes.set(mark, created.id);
   }
+  const wall = { stud: "2x6", wallboard: "1/2", frameDepth: 4.5625 } as const;
+  for (const { input } of OTHER_KINDS) {
+    const spec = SPEC.W1;
+    const created = await addOpeningType(scope, { ...input, widths: "widths" in input ? [...input.widths] : undefined, ...(input.kind === "door" ? {} : { wallBuildUp: wall }), trimSpec: spec });
+    openingTypes.set(input.mark, created.id);
+  }
 
   // Calibrate all but the last sheet (by the overall dimension; the first also gets its printed scale) and tag the first two.
   const stored = await listSheets(scope);
@@ -79,6 +99,10 @@ export async function seedDemoPlans(orgId: string, projectId: string | null, use
     if (i < 2) {
       for (const w of plan.windows) {
         await insertTag(scope, { sheetId: sheet.id, openingTypeId: openingTypes.get(w.mark)!, x: w.x, y: w.y });
+      }
+      const page = inspection.pages[i]!;
+      for (const { input, at } of OTHER_KINDS) {
+        await insertTag(scope, { sheetId: sheet.id, openingTypeId: openingTypes.get(input.mark)!, x: page.width * at[0], y: page.height * at[1] });
       }
     }
   }

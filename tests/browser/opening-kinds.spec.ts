@@ -36,6 +36,9 @@ test("a mulled unit and a door go from the window list to the cut list", async (
   await page.getByLabel("Height", { exact: true }).fill("81");
   await page.getByRole("button", { name: "Add to window list" }).click();
   await expect(page.getByText(/Added DR1/)).toBeVisible();
+  // The list says what each line is.
+  await expect(page.getByRole("row", { name: /MU2/ })).toContainText(/Mulled unit\s*2 units 2'-11 1\/2" \+ 2'-11 1\/2"/);
+  await expect(page.getByRole("row", { name: /DR1/ })).toContainText(/cased both sides/);
 
   // Tag one of each on the first unit plan.
   await openProjectSection(page, "Plans");

@@ -4,6 +4,7 @@ import { deleteColumn, editableColumns } from "@/components/ui/editable-table/co
 import type { OpeningTypeView } from "@/lib/plans/api-types";
 import { COLUMN_LABELS, type EditableColumn } from "@/lib/plans/window-list/columns";
 import { effectiveTrim } from "@/lib/plans/window-list/display";
+import { KindCell } from "./kind-cell";
 import { RowActions } from "./row-actions";
 import { WindowListCell } from "./window-list-cell";
 
@@ -29,6 +30,7 @@ const length = (column: EditableColumn, value: (r: WindowListRow) => number) =>
 
 export const columns = helper.columns([
   helper.accessor("mark", { id: "mark", header: COLUMN_LABELS.mark, sortFn: "alphanumeric", cell: cell("mark"), meta: NOWRAP }),
+  helper.accessor("kind", { id: "kind", header: "Kind", sortFn: "alphanumeric", cell: ({ row }) => <KindCell row={row.original} />, meta: { className: "min-w-24 max-w-56" } }),
   length("width", (r) => r.width),
   length("height", (r) => r.height),
   length("setback", (r) => r.setback),

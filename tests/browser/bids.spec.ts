@@ -93,7 +93,7 @@ test("price change, two takeoffs, compare, lock, documents, send", async ({ page
 
   await test.step("the crew cut list: by unit type, with the cautions first", async () => {
     await page.getByRole("link", { name: "Crew cut list (print)" }).click();
-    await expect(page.getByRole("complementary", { name: "Safety" })).toContainText("eye and hearing protection");
+    await expect(page.getByRole("complementary", { name: "Safety", exact: true })).toContainText("eye and hearing protection");
     await expect(page.getByRole("heading", { name: /^Type A/ })).toBeVisible();
     await expect(page.getByRole("heading", { name: /^W1 · 3'-0" × 5'-0"/ }).first()).toBeVisible();
     await page.goBack();

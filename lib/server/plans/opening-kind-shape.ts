@@ -1,17 +1,8 @@
 import type { OpeningKindName, OpeningShape } from "@/takeoff";
 import { invalid } from "@/lib/errors";
 
-export interface KindValues {
-  kind?: OpeningKindName;
-  width?: number;
-  height?: number;
-  widths?: number[];
-  mullGap?: number;
-  sides?: 1 | 2;
-  springHeight?: number;
-  rise?: number;
-  turn?: number;
-}
+/** What was typed: the kind, the overall size where the kind has one, and the kind's own fields. */
+export type KindValues = Omit<OpeningShape, "seat"> & { kind?: OpeningKindName; width?: number; height?: number };
 
 /**
  * An opening type's stored kind, shape and overall size from what was typed. The overall width of a
